@@ -1,0 +1,66 @@
+import { createRouter, createWebHistory, type RouteRecordRaw } from 'vue-router'
+import type { Area } from '@shared/schemas/auth'
+import { useAuthStore } from '@/stores/auth'
+import SignInView from '@/views/SignInView.vue'
+
+declare module 'vue-router' {
+  interface RouteMeta {
+    /** Reachable without signing in. */
+    public?: boolean
+    /** The navigation area this page belongs to; the role check uses it. */
+    area?: Area
+  }
+}
+
+export const ROUTE = {
+  signIn: 'sign-in',
+  dashboard: 'dashboard',
+  area: 'area',
+  admin: 'admin',
+  help: 'help',
+  forbidden: 'forbidden',
+  notFound: 'not-found',
+} as const
+
+const AreaView = () => import('@/views/AreaView.vue')
+
+const workAreas: Area[] = ['profiles', 'mixtures', 'catalogues', 'runs', 'comparisons', 'observations', 'reviews']
+
+export const routes: RouteRecordRaw[] = [
+  { path: '/sign-in', name: ROUTE.signIn, component: SignInView, meta: { public: true } },
+  {
+    path: '/',
+    component: () => import('@/layouts/TheAppLayout.vue'),
+    children: [
+      { path: '', name: ROUTE.dashboard, component: () => import('@/views/DashboardView.vue'), meta: { area: 'dashboard' } },
+      ...workAreas.map((area) => ({
+        path: area,
+        name: area,
+        component: AreaView,
+        props: { area },
+        meta: { area },
+      })),
+      { path: 'admin', name: ROUTE.admin, component: () => import('@/views/AdminView.vue'), meta: { area: 'admin' } },
+      { path: 'help', name: ROUTE.help, component: () => import('@/views/HelpView.vue'), meta: { area: 'help' } },
+      { path: 'forbidden', name: ROUTE.forbidden, component: () => import('@/views/ForbiddenView.vue') },
+      { path: ':pathMatch(.*)*', name: ROUTE.notFound, component: () => import('@/views/NotFoundView.vue') },
+    ],
+  },
+]
+
+export const router = createRouter({ history: createWebHistory(), routes })
+
+router.beforeEach(async (to) => {
+  const auth = useAuthStore()
+  await auth.load()
+  if (to.meta.public) {
+    return to.name === ROUTE.signIn && auth.isSignedIn ? { name: ROUTE.dashboard } : true
+  }
+  if (!auth.isSignedIn) {
+    return { name: ROUTE.signIn, query: to.fullPath !== '/' ? { redirect: to.fullPath } : {} }
+  }
+  if (to.meta.area && !auth.can(to.meta.area)) {
+    return { name: ROUTE.forbidden, query: { from: to.fullPath } }
+  }
+  return true
+})
