@@ -1,5 +1,5 @@
 import { existsSync } from 'node:fs'
-import { join } from 'node:path'
+import { join, resolve } from 'node:path'
 import express, { type Express } from 'express'
 import session from 'express-session'
 import connectPgSimple from 'connect-pg-simple'
@@ -88,8 +88,13 @@ export function createApp({ config, sequelize, sessionPool, logger, clientDistDi
   app.use('/api', api)
 
   if (clientDistDir && existsSync(join(clientDistDir, 'index.html'))) {
-    app.use(express.static(clientDistDir, { index: false, maxAge: '1h' }))
-    app.get('/{*splat}', (_req, res) => res.sendFile(join(clientDistDir, 'index.html')))
+    const root = resolve(clientDistDir)
+    app.use(express.static(root, { index: false, maxAge: '1h' }))
+    // Every non-API path is a client route: answer with the SPA shell, never cached.
+    app.get('/{*splat}', (_req, res) => {
+      res.setHeader('Cache-Control', 'no-cache')
+      res.sendFile(join(root, 'index.html'))
+    })
   }
 
   app.use(errorHandler(logger))

@@ -13,7 +13,10 @@ declare global {
 }
 
 /** A passport instance of our own (not the global singleton), so several apps can live in one process. */
-export function createPassport(): Passport {
+/** The type of a passport instance made with `new Passport()`. */
+export type PassportInstance = InstanceType<typeof Passport>
+
+export function createPassport(): PassportInstance {
   const passport = new Passport()
   passport.use(
     new LocalStrategy({ usernameField: 'email', passwordField: 'password' }, (email, password, done) => {

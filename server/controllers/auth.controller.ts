@@ -1,5 +1,5 @@
 import type { NextFunction, Request, Response } from 'express'
-import type { Passport } from 'passport'
+import type { PassportInstance as Passport } from '../auth/passport'
 import { AppError } from '../errors'
 import type { User } from '../models/index'
 

@@ -1,5 +1,5 @@
 import { Router, type Request } from 'express'
-import type { Passport } from 'passport'
+import type { PassportInstance as Passport } from '../auth/passport'
 import type { RateLimitRequestHandler } from 'express-rate-limit'
 import { signInSchema } from '../../shared/schemas/auth'
 import { createAuthController } from '../controllers/auth.controller'
