@@ -14,9 +14,20 @@ PORT=${TAULINE_PG_PORT:-54329}
 DB_NAME=${TAULINE_PG_DATABASE:-tauline}
 URL="postgres://postgres@127.0.0.1:$PORT/$DB_NAME"
 
+# Running means: the postmaster of our data folder is alive AND answers on our port.
 pg_running() {
   local bin; bin=$(find_pg_bin)
-  [ -f "$DATA_DIR/data/PG_VERSION" ] && as_pg "$bin/pg_ctl" -D "$DATA_DIR/data" status >/dev/null 2>&1
+  [ -f "$DATA_DIR/data/postmaster.pid" ] || return 1
+  pid_alive "$(head -n1 "$DATA_DIR/data/postmaster.pid")" || return 1
+  "$bin/pg_isready" -q -h 127.0.0.1 -p "$PORT" -t 5
+}
+
+# A live (not zombie) PostgreSQL process with this PID.
+pid_alive() {
+  local stat comm
+  stat=$(ps -p "$1" -o stat= 2>/dev/null) || return 1
+  comm=$(ps -p "$1" -o comm= 2>/dev/null)
+  [[ "$stat" != Z* ]] && [[ "$comm" == postgres* ]]
 }
 
 start() {
@@ -42,7 +53,9 @@ start() {
     # of an unrelated process would block it, so remove the file when no postgres owns that PID.
     if [ -f "$DATA_DIR/data/postmaster.pid" ]; then
       local pid; pid=$(head -n1 "$DATA_DIR/data/postmaster.pid")
-      if ! ps -p "$pid" -o comm= 2>/dev/null | grep -q postgres; then
+      if pid_alive "$pid"; then
+        die "a PostgreSQL (PID $pid) holds $DATA_DIR but does not answer on port $PORT; stop it or fix TAULINE_PG_PORT"
+      else
         log "removing stale postmaster.pid (PID $pid is not a running PostgreSQL)"
         rm -f "$DATA_DIR/data/postmaster.pid"
       fi
@@ -63,7 +76,7 @@ stop() {
   [ -n "${DATABASE_URL:-}" ] && { log "DATABASE_URL is set: nothing of ours to stop"; return 0; }
   local bin; bin=$(find_pg_bin)
   [ -n "$bin" ] || return 0
-  if pg_running; then
+  if [ -f "$DATA_DIR/data/postmaster.pid" ] && pid_alive "$(head -n1 "$DATA_DIR/data/postmaster.pid")"; then
     as_pg "$bin/pg_ctl" -D "$DATA_DIR/data" -m fast -w -t 30 stop >/dev/null 2>&1 \
       || as_pg "$bin/pg_ctl" -D "$DATA_DIR/data" -m immediate -w -t 30 stop >/dev/null 2>&1 || true
     log "PostgreSQL stopped"

@@ -1,7 +1,7 @@
 // Seeds the demo team (idempotent) and prints how to sign in.
 import { loadConfig } from '../server/config'
 import { createSequelize } from '../server/db'
-import { DEMO_ORGANISATION, DEMO_TEAM } from '../server/demo/demo-team'
+import { DEMO_ORGANISATION } from '../server/demo/demo-team'
 import { seedDemoTeam } from '../server/demo/seed'
 import { loadEnvFile } from '../server/env-file'
 import { initModels } from '../server/models/index'
