@@ -14,6 +14,8 @@ trap 'bash scripts/pg-temp.sh stop "$TAULINE_TEST_PG_DIR"' EXIT
 
 log "type checking"
 npm run --silent typecheck
+log "linting"
+npx eslint .
 log "building the client"
 npx vite build --logLevel warn
 

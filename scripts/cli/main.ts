@@ -1,0 +1,38 @@
+// tauline — command-line access to the Tauline engine. See README "Command line".
+import { CliError } from './args'
+import { planckCommand, planckHelp } from './planck-command'
+
+const commands: Record<string, { run: (argv: string[]) => void | Promise<void>; help: string }> = {
+  planck: { run: planckCommand, help: planckHelp },
+}
+
+const usage = `Usage: tauline <command> [options]   (add --json for machine-readable output)
+
+Commands:
+${Object.values(commands)
+  .map((c) => '  ' + c.help.split('\n')[0])
+  .join('\n')}
+
+tauline help <command> shows the details of one command.`
+
+async function main(argv: string[]) {
+  const [name, ...rest] = argv
+  if (!name || name === '--help' || name === '-h') return void process.stdout.write(usage + '\n')
+  if (name === 'help') {
+    const c = commands[rest[0] ?? '']
+    return void process.stdout.write((c ? c.help : usage) + '\n')
+  }
+  const command = commands[name]
+  if (!command) throw new CliError(`unknown command "${name}"\n\n${usage}`)
+  await command.run(rest)
+}
+
+try {
+  await main(process.argv.slice(2))
+} catch (err) {
+  if (err instanceof CliError || (err instanceof Error && (err.name === 'PhysicsError' || 'code' in err))) {
+    process.stderr.write(`tauline: ${err.message}\n`)
+    process.exit(2)
+  }
+  throw err
+}
