@@ -31,8 +31,8 @@ import { manabeWetheraldRelativeHumidity, waterVapourVmrProfile } from './water-
 /** Identifiers of the built-in climatologies. */
 export const CLIMATOLOGY_IDS = [
   'tropical',
-  'midlatitude-summer',
-  'midlatitude-winter',
+  'mid-latitude-summer',
+  'mid-latitude-winter',
   'subarctic-summer',
   'subarctic-winter',
 ] as const
@@ -108,7 +108,7 @@ export const CLIMATOLOGY_PRESETS: readonly ClimatologyPreset[] = [
     },
   },
   {
-    id: 'midlatitude-summer',
+    id: 'mid-latitude-summer',
     title: 'Mid-latitude summer',
     description:
       'A temperate summer column near 45° latitude: 294 K surface, tropopause near 180 hPa, ' +
@@ -131,7 +131,7 @@ export const CLIMATOLOGY_PRESETS: readonly ClimatologyPreset[] = [
     },
   },
   {
-    id: 'midlatitude-winter',
+    id: 'mid-latitude-winter',
     title: 'Mid-latitude winter',
     description:
       'A cold-season column near 45° latitude: 272 K surface, a weaker lapse rate, tropopause ' +

@@ -37,8 +37,8 @@ describe('CLIMATOLOGY_PRESETS', () => {
     // MLW 272.2, SAS 287.2, SAW 257.2 K — used only as guides for our own round values.
     const guides: Record<string, number> = {
       tropical: 299.7,
-      'midlatitude-summer': 294.2,
-      'midlatitude-winter': 272.2,
+      'mid-latitude-summer': 294.2,
+      'mid-latitude-winter': 272.2,
       'subarctic-summer': 287.2,
       'subarctic-winter': 257.2,
     }
@@ -53,7 +53,7 @@ describe('CLIMATOLOGY_PRESETS', () => {
 })
 
 describe('climatologyTemperatureK', () => {
-  const params = getClimatologyPreset('midlatitude-summer').parameters
+  const params = getClimatologyPreset('mid-latitude-summer').parameters
 
   it('when in the troposphere, follows T = T_s (p/p_s)^{R_dΓ/g₀} (constant lapse rate)', () => {
     // polytropic atmosphere (U.S. Standard Atmosphere 1976 eq. 33a form, with R_d and g₀).
@@ -179,7 +179,7 @@ describe('buildClimatologyProfile', () => {
 
   it('when the defaults are used, CO2/N2O/CH4 are 400/0.33/1.9 ppmv in dry air', () => {
     // typical present-day values (common practice)
-    const level = buildClimatologyProfile('midlatitude-summer').levels[30]
+    const level = buildClimatologyProfile('mid-latitude-summer').levels[30]
     const dry = 1 - level.vmr.H2O!
     expectRelClose(level.vmr.CO2! / dry, 400e-6, 1e-14)
     expectRelClose(level.vmr.N2O! / dry, 0.33e-6, 1e-14)
@@ -202,7 +202,7 @@ describe('buildClimatologyProfile', () => {
   })
 
   it('when custom parameters are inconsistent or too cold, throws PhysicsError', () => {
-    const base = getClimatologyPreset('midlatitude-winter').parameters
+    const base = getClimatologyPreset('mid-latitude-winter').parameters
     const badOrder: ClimatologyParameters = { ...base, tropopausePressurePa: 120000 }
     expect(() => buildClimatologyProfile(badOrder)).toThrow(PhysicsError)
     // 12 K/km up to 100 hPa gives T ≈ 272 × 0.0987^0.351 ≈ 120 K < 150 K
