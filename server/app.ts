@@ -14,6 +14,8 @@ import type { Logger } from './logger'
 import { apiNotFound, errorHandler } from './middlewares/error-handler'
 import { authRoutes } from './routes/auth.routes'
 import { healthRoutes } from './routes/health.routes'
+import { mixturesRoutes } from './routes/mixtures.routes'
+import { profilesRoutes } from './routes/profiles.routes'
 import { usersRoutes } from './routes/users.routes'
 
 export interface AppDeps {
@@ -84,6 +86,8 @@ export function createApp({ config, sequelize, sessionPool, logger, clientDistDi
   api.use(csrfSynchronisedProtection)
   api.use('/auth', authRoutes(passport, generateToken, signInLimiter))
   api.use('/admin/users', usersRoutes())
+  api.use('/profiles', profilesRoutes())
+  api.use('/mixtures', mixturesRoutes())
   api.use(apiNotFound)
   app.use('/api', api)
 

@@ -24,7 +24,7 @@ export const ROUTE = {
 
 const AreaView = () => import('@/views/AreaView.vue')
 
-const workAreas: Area[] = ['profiles', 'mixtures', 'catalogues', 'runs', 'comparisons', 'observations', 'reviews']
+const workAreas: Area[] = ['profiles', 'catalogues', 'runs', 'comparisons', 'observations', 'reviews']
 
 export const routes: RouteRecordRaw[] = [
   { path: '/sign-in', name: ROUTE.signIn, component: SignInView, meta: { public: true } },
@@ -40,6 +40,7 @@ export const routes: RouteRecordRaw[] = [
         props: { area },
         meta: { area },
       })),
+      { path: 'mixtures', name: 'mixtures', component: () => import('@/views/MixturesView.vue'), meta: { area: 'mixtures' } },
       { path: 'admin', name: ROUTE.admin, component: () => import('@/views/AdminView.vue'), meta: { area: 'admin' } },
       { path: 'help', name: ROUTE.help, component: () => import('@/views/HelpView.vue'), meta: { area: 'help' } },
       { path: 'forbidden', name: ROUTE.forbidden, component: () => import('@/views/ForbiddenView.vue') },

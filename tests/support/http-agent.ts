@@ -12,6 +12,7 @@ export async function csrfAgent(app: Express) {
     get: (path: string) => agent.get(path),
     post: (path: string, body: object = {}) => agent.post(path).set('x-csrf-token', token).send(body),
     patch: (path: string, body: object) => agent.patch(path).set('x-csrf-token', token).send(body),
+    put: (path: string, body: object) => agent.put(path).set('x-csrf-token', token).send(body),
     delete: (path: string) => agent.delete(path).set('x-csrf-token', token),
     setToken: (t: string) => {
       token = t

@@ -1,0 +1,5 @@
+export * from './settings'
+export * from './prepare'
+export * from './compute-chunk'
+export * from './merge'
+export * from './compute'
