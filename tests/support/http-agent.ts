@@ -17,6 +17,12 @@ export async function csrfAgent(app: Express) {
     setToken: (t: string) => {
       token = t
     },
+    /** A multipart POST with the CSRF header, for file uploads. */
+    upload: (path: string, fields: Record<string, string>, file: { name: string; field: string; content: Buffer }) => {
+      const req = agent.post(path).set('x-csrf-token', token)
+      for (const [k, v] of Object.entries(fields)) req.field(k, v)
+      return req.attach(file.field, file.content, file.name)
+    },
   }
 }
 
