@@ -16,6 +16,8 @@ import { authRoutes } from './routes/auth.routes'
 import { healthRoutes } from './routes/health.routes'
 import { mixturesRoutes } from './routes/mixtures.routes'
 import { profilesRoutes } from './routes/profiles.routes'
+import { runsRoutes } from './routes/runs.routes'
+import type { RunQueue } from './runs/run-queue'
 import { usersRoutes } from './routes/users.routes'
 
 export interface AppDeps {
@@ -25,12 +27,14 @@ export interface AppDeps {
   logger: Logger
   /** Built client (vite build output) to serve with an SPA fallback; omitted in API-only tests. */
   clientDistDir?: string
+  /** The run queue, once connected; run submission answers 503 without it. */
+  getRunQueue?: () => RunQueue | undefined
 }
 
 export const SESSION_COOKIE = 'tauline.sid'
 
 /** Builds the Express app without listening, so tests drive it through supertest. */
-export function createApp({ config, sequelize, sessionPool, logger, clientDistDir }: AppDeps): Express {
+export function createApp({ config, sequelize, sessionPool, logger, clientDistDir, getRunQueue }: AppDeps): Express {
   const app = express()
   app.disable('x-powered-by')
   app.set('trust proxy', 'loopback')
@@ -88,6 +92,7 @@ export function createApp({ config, sequelize, sessionPool, logger, clientDistDi
   api.use('/admin/users', usersRoutes())
   api.use('/profiles', profilesRoutes())
   api.use('/mixtures', mixturesRoutes())
+  api.use('/runs', runsRoutes(sequelize, getRunQueue ?? (() => undefined)))
   api.use(apiNotFound)
   app.use('/api', api)
 

@@ -16,6 +16,11 @@ const configSchema = z.object({
   DEMO_PASSWORD: z.string().min(8).default('tauline-demo-2026'),
   SEED_DEMO: z.enum(['true', 'false']).default('true'),
   LOG_LEVEL: z.enum(['debug', 'info', 'warn', 'error', 'silent']).default('info'),
+  // Empty means "not set" (one thread per core), not 0.
+  RUN_WORKER_THREADS: z.preprocess((v) => (v === '' ? undefined : v), z.coerce.number().int().min(0).max(256).optional()),
+  RUN_CHUNK_TIMEOUT_S: z.coerce.number().int().min(2).max(86400).default(900),
+  RUN_RETRY_LIMIT: z.coerce.number().int().min(0).max(10).default(2),
+  QUEUE_MAINTENANCE_S: z.coerce.number().int().min(1).max(3600).default(30),
 })
 
 export interface AppConfig {
@@ -30,6 +35,13 @@ export interface AppConfig {
   demoPassword: string
   seedDemo: boolean
   logLevel: 'debug' | 'info' | 'warn' | 'error' | 'silent'
+  runs: {
+    /** Chunk threads in this process; undefined = one per core, 0 = submit only. */
+    workerThreads?: number
+    chunkTimeoutSeconds: number
+    retryLimit: number
+    maintenanceIntervalSeconds: number
+  }
 }
 
 /** Parses settings; throws one readable error listing every bad variable. */
@@ -53,5 +65,11 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     demoPassword: c.DEMO_PASSWORD,
     seedDemo: c.SEED_DEMO === 'true',
     logLevel: c.LOG_LEVEL,
+    runs: {
+      workerThreads: c.RUN_WORKER_THREADS,
+      chunkTimeoutSeconds: c.RUN_CHUNK_TIMEOUT_S,
+      retryLimit: c.RUN_RETRY_LIMIT,
+      maintenanceIntervalSeconds: c.QUEUE_MAINTENANCE_S,
+    },
   }
 }

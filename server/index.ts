@@ -6,6 +6,7 @@ import { loadEnvFile } from './env-file'
 import { createLogger } from './logger'
 import { initModels } from './models/index'
 import { createMigrator } from './migrator'
+import { startRunSystem } from './runs/run-system'
 
 /** Boots the server: validates settings, checks the database, refuses to run on a stale schema. */
 async function main() {
@@ -21,7 +22,8 @@ async function main() {
   }
   const sessionPool = createPgPool(config.databaseUrl)
   const clientDistDir = fileURLToPath(new URL('../dist', import.meta.url))
-  const app = createApp({ config, sequelize, sessionPool, logger, clientDistDir })
+  const runSystem = await startRunSystem(config, sequelize, logger)
+  const app = createApp({ config, sequelize, sessionPool, logger, clientDistDir, getRunQueue: () => runSystem.queue })
   const server = app.listen(config.port, config.host, () => {
     logger.info(`Tauline is serving http://${config.host}:${config.port}`)
   })
@@ -29,7 +31,10 @@ async function main() {
   const shutdown = (signal: string) => {
     logger.info(`${signal}: shutting down`)
     server.close(() => {
-      Promise.all([sequelize.close(), sessionPool.end()]).finally(() => process.exit(0))
+      runSystem
+        .stop()
+        .then(() => Promise.all([sequelize.close(), sessionPool.end()]))
+        .finally(() => process.exit(0))
     })
     setTimeout(() => process.exit(1), 10_000).unref()
   }

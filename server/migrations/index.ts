@@ -2,6 +2,7 @@ import * as m0001 from './0001-create-users'
 import * as m0002 from './0002-create-session'
 import * as m0003 from './0003-create-profiles'
 import * as m0004 from './0004-create-gas-mixtures'
+import * as m0005 from './0005-create-runs'
 
 /** Every migration in order. Add new ones at the end; never edit one that has shipped. */
 export const migrations = [
@@ -9,4 +10,5 @@ export const migrations = [
   { name: '0002-create-session', ...m0002 },
   { name: '0003-create-profiles', ...m0003 },
   { name: '0004-create-gas-mixtures', ...m0004 },
+  { name: '0005-create-runs', ...m0005 },
 ]

@@ -9,6 +9,7 @@ import { initModels } from '../../server/models/index'
 import { seedDemoTeam } from '../../server/demo/seed'
 import { DEMO_TEAM } from '../../server/demo/demo-team'
 import type { Role } from '../../shared/schemas/auth'
+import { startRunSystem, type RunSystem } from '../../server/runs/run-system'
 import { createTestDatabase } from './database'
 
 export const TEST_PASSWORD = 'test-password-123'
@@ -20,12 +21,19 @@ export interface TestApp {
   sessionPool: pg.Pool
   /** The demo account of a role, with the test password. */
   account: (role: Role) => { email: string; password: string }
+  /** The run queue and workers, when started with `runs`. */
+  runSystem?: RunSystem
   close: () => Promise<void>
 }
 
 /** An app on its own fresh database with the demo team seeded (password TEST_PASSWORD). */
 export async function createTestApp(
-  options: { env?: Record<string, string>; clientDistDir?: string } = {},
+  options: {
+    env?: Record<string, string>
+    clientDistDir?: string
+    /** Start the run queue with this many chunk threads in-process (0 = queue only). */
+    runs?: { threads: number }
+  } = {},
 ): Promise<TestApp> {
   const db = await createTestDatabase()
   const config = loadConfig({
@@ -40,12 +48,15 @@ export async function createTestApp(
   initModels(sequelize)
   await seedDemoTeam(TEST_PASSWORD)
   const sessionPool = createPgPool(config.databaseUrl)
+  const logger = createLogger('silent')
+  const runSystem = options.runs ? await startRunSystem(config, sequelize, logger, options.runs.threads) : undefined
   const app = createApp({
     config,
     sequelize,
     sessionPool,
-    logger: createLogger('silent'),
+    logger,
     clientDistDir: options.clientDistDir,
+    getRunQueue: () => runSystem?.queue,
   })
   return {
     app,
@@ -53,7 +64,9 @@ export async function createTestApp(
     sequelize,
     sessionPool,
     account: (role) => ({ email: DEMO_TEAM.find((m) => m.role === role)!.email, password: TEST_PASSWORD }),
+    runSystem,
     close: async () => {
+      await runSystem?.stop()
       await sequelize.close()
       await sessionPool.end()
       await db.drop()

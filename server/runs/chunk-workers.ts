@@ -1,0 +1,32 @@
+import { hostname } from 'node:os'
+import type { Sequelize } from 'sequelize'
+import type { Logger } from '../logger'
+import type { ChunkPool } from './chunk-pool'
+import { processChunkJob } from './chunk-processor'
+import { CHUNK_QUEUE, type ChunkJobData, type RunQueue } from './run-queue'
+
+/**
+ * Subscribes this process to the chunk queue with one polling loop per pool thread, so a machine
+ * takes as many chunks at a time as it has threads. Any number of processes, on any machines
+ * reaching the same database, can do this.
+ */
+export async function startChunkWorkers(
+  queue: RunQueue,
+  deps: { sequelize: Sequelize; pool: ChunkPool; logger: Logger },
+  workerName = `${hostname()}:${process.pid}`,
+): Promise<void> {
+  for (let i = 0; i < deps.pool.size; i++) {
+    await queue.boss.work<ChunkJobData>(
+      CHUNK_QUEUE,
+      { batchSize: 1, pollingIntervalSeconds: 0.5, includeMetadata: true },
+      async ([job]) => {
+        await processChunkJob({ ...deps, workerId: `${workerName}#${i}` }, job.data, {
+          id: job.id,
+          retryCount: job.retryCount,
+          retryLimit: job.retryLimit,
+        })
+      },
+    )
+  }
+  deps.logger.info(`chunk workers ready: ${deps.pool.size} thread(s) on ${workerName}`)
+}

@@ -1,0 +1,60 @@
+import PgBoss from 'pg-boss'
+import type { Logger } from '../logger'
+
+/** Name of the pg-boss queue of chunk jobs. */
+export const CHUNK_QUEUE = 'run-chunk'
+
+export interface ChunkJobData {
+  runId: number
+  chunkIndex: number
+}
+
+export interface RunQueueOptions {
+  databaseUrl: string
+  logger: Logger
+  /** A chunk job not finished within this time is taken to be lost (worker died) and retried. */
+  chunkTimeoutSeconds?: number
+  /** Retries of a chunk after a crash or timeout before the run fails. */
+  retryLimit?: number
+  /** How often pg-boss looks for expired jobs, s. */
+  maintenanceIntervalSeconds?: number
+  schema?: string
+}
+
+export interface RunQueue {
+  boss: PgBoss
+  enqueueChunk(data: ChunkJobData): Promise<string>
+  cancelJobs(jobIds: string[]): Promise<void>
+  stop(): Promise<void>
+}
+
+/** Connects pg-boss (tables in their own schema) and makes sure the chunk queue exists. */
+export async function createRunQueue(options: RunQueueOptions): Promise<RunQueue> {
+  const retryLimit = options.retryLimit ?? 2
+  const expireInSeconds = options.chunkTimeoutSeconds ?? 900
+  const boss = new PgBoss({
+    connectionString: options.databaseUrl,
+    schema: options.schema ?? 'pgboss',
+    max: 4,
+    maintenanceIntervalSeconds: options.maintenanceIntervalSeconds ?? 30,
+    monitorStateIntervalSeconds: 60,
+  })
+  boss.on('error', (err) => options.logger.error('job queue error', err))
+  await boss.start()
+  const queue = { name: CHUNK_QUEUE, retryLimit, retryDelay: 1, expireInSeconds }
+  if (await boss.getQueue(CHUNK_QUEUE)) await boss.updateQueue(CHUNK_QUEUE, queue)
+  else await boss.createQueue(CHUNK_QUEUE, queue)
+
+  return {
+    boss,
+    async enqueueChunk(data) {
+      const id = await boss.send(CHUNK_QUEUE, data, { retryLimit, retryDelay: 1, expireInSeconds })
+      if (!id) throw new Error(`could not queue chunk ${data.chunkIndex} of run ${data.runId}`)
+      return id
+    },
+    async cancelJobs(jobIds) {
+      if (jobIds.length > 0) await boss.cancel(CHUNK_QUEUE, jobIds)
+    },
+    stop: () => boss.stop({ graceful: true, wait: true, timeout: 10_000 }),
+  }
+}

@@ -1,0 +1,164 @@
+import { Op, type Sequelize, type WhereOptions } from 'sequelize'
+import { planChunks } from '../../shared/physics/engine/prepare'
+import type { Page } from '../../shared/schemas/paging'
+import { TERMINAL_RUN_STATUSES, type CreateRunInput, type RunDetail, type RunListQuery, type RunSummary } from '../../shared/schemas/runs'
+import { AppError } from '../errors'
+import { Run, RunChunk, RunResult, User } from '../models/index'
+import { assertCanModify, type Actor } from '../services/access'
+import { runInputHash, snapshotRunInputs } from './run-inputs'
+import type { RunQueue } from './run-queue'
+
+function toSummary(run: Run, olr: number | null = null): RunSummary {
+  const elapsedS = run.startedAt ? (Date.now() - run.startedAt.getTime()) / 1000 : null
+  const etaSeconds =
+    run.status === 'running' && elapsedS !== null && run.chunksDone > 0
+      ? (elapsedS / run.chunksDone) * (run.chunkCount - run.chunksDone)
+      : null
+  return {
+    id: run.id,
+    name: run.name,
+    status: run.status,
+    profileName: run.inputs.profile.name,
+    mixtureName: run.inputs.mixture?.name ?? null,
+    startCm: run.inputs.settings.startCm,
+    endCm: run.inputs.settings.endCm,
+    chunkCount: run.chunkCount,
+    chunksDone: run.chunksDone,
+    error: run.error,
+    inputHash: run.inputHash,
+    engineVersion: run.engineVersion,
+    ownerId: run.ownerId,
+    ownerName: run.owner?.displayName ?? '',
+    queuedAt: run.queuedAt.toISOString(),
+    startedAt: run.startedAt?.toISOString() ?? null,
+    finishedAt: run.finishedAt?.toISOString() ?? null,
+    computeMs: run.computeMs,
+    etaSeconds,
+    olrWPerM2: olr,
+  }
+}
+
+/** Snapshots the inputs, stores the run and its chunks, and queues every chunk. */
+export async function createRun(sequelize: Sequelize, queue: RunQueue, actor: Actor, input: CreateRunInput): Promise<RunDetail> {
+  const { inputs, warnings } = await snapshotRunInputs(input)
+  const chunks = planChunks(inputs.settings)
+  const name = input.name?.trim() || `${inputs.profile.name}${inputs.mixture ? ` · ${inputs.mixture.name}` : ''} · ${inputs.settings.startCm}–${inputs.settings.endCm} cm⁻¹`
+  const run = await sequelize.transaction(async (tx) => {
+    const created = await Run.create(
+      {
+        name: name.slice(0, 160),
+        status: 'queued',
+        inputs,
+        inputHash: runInputHash(inputs),
+        engineVersion: inputs.engineVersion,
+        chunkCount: chunks.length,
+        error: null,
+        queuedAt: new Date(),
+        startedAt: null,
+        finishedAt: null,
+        ownerId: actor.id,
+      },
+      { transaction: tx },
+    )
+    await RunChunk.bulkCreate(
+      chunks.map((c) => ({
+        runId: created.id,
+        chunkIndex: c.index,
+        startCm: c.startCm,
+        endCm: c.endCm,
+        status: 'pending' as const,
+        jobId: null,
+        workerId: null,
+        result: null,
+        error: null,
+        computeMs: null,
+        startedAt: null,
+        finishedAt: null,
+      })),
+      { transaction: tx },
+    )
+    return created
+  })
+  // Queue after the rows are committed, so a fast worker always finds them.
+  for (const c of chunks) {
+    const jobId = await queue.enqueueChunk({ runId: run.id, chunkIndex: c.index })
+    await RunChunk.update({ jobId }, { where: { runId: run.id, chunkIndex: c.index } })
+  }
+  return { ...(await getRun(run.id)), mixtureWarnings: warnings }
+}
+
+export async function listRuns(actor: Actor, query: RunListQuery): Promise<Page<RunSummary>> {
+  const where: WhereOptions<Run> = {}
+  if (query.status) Object.assign(where, { status: query.status })
+  if (query.mine === 'true') Object.assign(where, { ownerId: actor.id })
+  if (query.search) Object.assign(where, { name: { [Op.iLike]: `%${query.search}%` } })
+  const { rows, count } = await Run.findAndCountAll({
+    where,
+    include: [
+      { model: User, as: 'owner', attributes: ['displayName'] },
+      { model: RunResult, as: 'result', attributes: ['summary'] },
+    ],
+    order: [['id', 'DESC']],
+    limit: query.pageSize,
+    offset: (query.page - 1) * query.pageSize,
+  })
+  const olr = (r: Run) => ((r as unknown as { result?: RunResult }).result?.summary?.olrWPerM2 as number | undefined) ?? null
+  return { items: rows.map((r) => toSummary(r, olr(r))), total: count, page: query.page, pageSize: query.pageSize }
+}
+
+async function findOrFail(id: number): Promise<Run> {
+  const run = await Run.findByPk(id, { include: [{ model: User, as: 'owner', attributes: ['displayName'] }] })
+  if (!run) throw AppError.notFound('Run')
+  return run
+}
+
+export async function getRun(id: number): Promise<RunDetail> {
+  const run = await findOrFail(id)
+  const result = await RunResult.findByPk(id, { attributes: ['summary'] })
+  return { ...toSummary(run, (result?.summary?.olrWPerM2 as number | undefined) ?? null), inputs: run.inputs }
+}
+
+/** Progress only, cheap enough to poll every second. */
+export async function getRunProgress(id: number) {
+  const run = await Run.findByPk(id, { attributes: ['id', 'status', 'chunksDone', 'chunkCount', 'startedAt', 'finishedAt', 'error', 'queuedAt', 'inputs'] })
+  if (!run) throw AppError.notFound('Run')
+  const s = toSummary(run)
+  return { id: s.id, status: s.status, chunksDone: s.chunksDone, chunkCount: s.chunkCount, startedAt: s.startedAt, finishedAt: s.finishedAt, etaSeconds: s.etaSeconds, error: s.error }
+}
+
+/** Stops a queued or running run: pending jobs are cancelled, running chunks are discarded. */
+export async function cancelRun(sequelize: Sequelize, queue: RunQueue, actor: Actor, id: number): Promise<RunDetail> {
+  const run = await findOrFail(id)
+  assertCanModify(actor, run.ownerId, 'run')
+  if (TERMINAL_RUN_STATUSES.includes(run.status)) {
+    throw AppError.conflict(`The run has already ${run.status === 'succeeded' ? 'finished' : run.status}.`)
+  }
+  const jobIds = await sequelize.transaction(async (tx) => {
+    const locked = await Run.findByPk(id, { transaction: tx, lock: tx.LOCK.UPDATE })
+    if (!locked || TERMINAL_RUN_STATUSES.includes(locked.status)) return []
+    locked.status = 'cancelled'
+    locked.finishedAt = new Date()
+    locked.error = 'Cancelled by ' + (actor.id === run.ownerId ? 'its owner' : 'an administrator')
+    await locked.save({ transaction: tx })
+    const pending = await RunChunk.findAll({ where: { runId: id, status: ['pending', 'running', 'failed'] }, transaction: tx })
+    await RunChunk.update({ status: 'cancelled' }, { where: { runId: id, status: ['pending', 'running', 'failed'] }, transaction: tx })
+    return pending.map((c) => c.jobId).filter((j): j is string => j !== null)
+  })
+  await queue.cancelJobs(jobIds)
+  return getRun(id)
+}
+
+export async function deleteRun(sequelize: Sequelize, queue: RunQueue, actor: Actor, id: number): Promise<void> {
+  const run = await findOrFail(id)
+  assertCanModify(actor, run.ownerId, 'run')
+  if (!TERMINAL_RUN_STATUSES.includes(run.status)) await cancelRun(sequelize, queue, actor, id)
+  await run.destroy()
+}
+
+export async function getRunResults(id: number) {
+  const run = await findOrFail(id)
+  if (run.status !== 'succeeded') throw AppError.conflict(`The run has no results yet (status: ${run.status}).`)
+  const result = await RunResult.findByPk(id)
+  if (!result) throw AppError.notFound('Run results')
+  return { runId: id, inputHash: run.inputHash, engineVersion: run.engineVersion, summary: result.summary, ...result.data }
+}
