@@ -2,12 +2,20 @@
  * Registry of the built-in line catalogue: the band generators, and the function that runs them
  * into one sorted line list with a per-band summary.
  *
- * Generators of other molecule families (asymmetric tops, CH4) plug in by appending their
- * `BandGenerator` objects to `BUILT_IN_BAND_GENERATORS` (the lead wires them), or by passing a
- * list to `buildBuiltInCatalogue`.
+ * The catalogue holds the linear-molecule bands (CO2 626/636/628, N2O 446; `linear/`) and the
+ * asymmetric-top and CH4 bands (H2O rotation and ν₂, O3 ν₃ and ν₁, CH4 ν₄; `asymmetric/`). Other
+ * generators can be passed to `buildBuiltInCatalogue` as a list.
  */
 import { PhysicsError } from '../physics/errors'
 import { validateSpectralLine, type SpectralLine } from '../physics/spectroscopy/line'
+import {
+  METHANE_NU4,
+  OZONE_BANDS,
+  WATER_BANDS,
+  generateMethaneLines,
+  generateOzoneLines,
+  generateWaterLines,
+} from './asymmetric'
 import type { ConfidenceTag } from './constants/confidence'
 import { LINEAR_BANDS, type LinearBandConstants } from './constants/linear-bands'
 import { generateLinearBandLines } from './linear/band-generator'
@@ -16,7 +24,7 @@ import { generateLinearBandLines } from './linear/band-generator'
  * Version of the catalogue generators; bump whenever any generated number may change (it is
  * written into the catalogue file header).
  */
-export const CATALOGUE_GENERATOR_VERSION = '1.0.0'
+export const CATALOGUE_GENERATOR_VERSION = '2.0.0'
 
 /** One band (or group of bands) of the built-in catalogue. */
 export interface BandGenerator {
@@ -93,10 +101,76 @@ export const LINEAR_BAND_GENERATORS: readonly BandGenerator[] =
   LINEAR_BANDS.map(linearBandGenerator)
 
 /**
- * All generators of the built-in catalogue. Asymmetric-top (H2O, O3) and CH4 generators are to be
- * appended here when they are wired in.
+ * Removes non-integer statistical weights from generated lines (returns the same array).
+ *
+ * Method: a line whose g′ or g″ is not an integer loses that (optional) field; every other field,
+ * Einstein A included, is kept.
+ * Notes: the catalogue file stores statistical weights as integers, the database convention (0 =
+ * absent). The CH4 generator merges each tetrahedrally split J manifold into one line and gives it
+ * the average spin-weighted degeneracy (4/3)(2J′+1)², which is not an integer for most J′; its
+ * A was computed with that average, so dropping the weight loses nothing the optics use.
+ * Source: common practice (line-list file conventions).
+ * @param lines generated lines (modified in place)
  */
-export const BUILT_IN_BAND_GENERATORS: readonly BandGenerator[] = [...LINEAR_BAND_GENERATORS]
+export function dropNonIntegerStatisticalWeights(lines: SpectralLine[]): SpectralLine[] {
+  for (const line of lines) {
+    if (line.upperStatisticalWeight !== undefined && !Number.isInteger(line.upperStatisticalWeight))
+      delete line.upperStatisticalWeight
+    if (line.lowerStatisticalWeight !== undefined && !Number.isInteger(line.lowerStatisticalWeight))
+      delete line.lowerStatisticalWeight
+  }
+  return lines
+}
+
+/**
+ * Generators of H2O 161 (pure rotation; ν₂) and O3 666 (ν₃; ν₁), one per band, each running the
+ * molecule's generator with default options restricted to its band, then CH4 211 ν₄.
+ */
+export const ASYMMETRIC_BAND_GENERATORS: readonly BandGenerator[] = [
+  ...WATER_BANDS.map((band): BandGenerator => ({
+    id: band.id,
+    molecule: 'H2O',
+    moleculeId: band.moleculeId,
+    isotopologueId: band.isotopologueId,
+    description: band.title,
+    source: band.source,
+    confidence: band.confidence,
+    bandIntensityCmPerMolecule: band.bandIntensityCmPerMolecule ?? undefined,
+    generate: () => generateWaterLines({ bandIds: [band.id] }),
+  })),
+  ...OZONE_BANDS.map((band): BandGenerator => ({
+    id: band.id,
+    molecule: 'O3',
+    moleculeId: band.moleculeId,
+    isotopologueId: band.isotopologueId,
+    description: band.title,
+    source: band.source,
+    confidence: band.confidence,
+    bandIntensityCmPerMolecule: band.bandIntensityCmPerMolecule ?? undefined,
+    generate: () => generateOzoneLines({ bandIds: [band.id] }),
+  })),
+  {
+    id: METHANE_NU4.id,
+    molecule: 'CH4',
+    moleculeId: METHANE_NU4.moleculeId,
+    isotopologueId: METHANE_NU4.isotopologueId,
+    description: METHANE_NU4.title,
+    source: METHANE_NU4.source,
+    confidence: METHANE_NU4.confidence,
+    bandIntensityCmPerMolecule: METHANE_NU4.bandIntensityCmPerMolecule,
+    generate: () => dropNonIntegerStatisticalWeights(generateMethaneLines()),
+  },
+]
+
+/**
+ * All generators of the built-in catalogue: the linear bands in table order, then H2O, O3, CH4.
+ * The H2O pure-rotation band has no published band intensity (its lines are absolute, from the
+ * dipole moment), so its summary carries `publishedBandIntensityCmPerMolecule: null`.
+ */
+export const BUILT_IN_BAND_GENERATORS: readonly BandGenerator[] = [
+  ...LINEAR_BAND_GENERATORS,
+  ...ASYMMETRIC_BAND_GENERATORS,
+]
 
 /**
  * Runs the generators and assembles the built-in catalogue.

@@ -1,10 +1,12 @@
 import { describe, expect, it } from 'vitest'
 import { LINEAR_BANDS } from '../../../shared/catalogue/constants/linear-bands'
 import {
+  ASYMMETRIC_BAND_GENERATORS,
   BUILT_IN_BAND_GENERATORS,
   CATALOGUE_GENERATOR_VERSION,
   LINEAR_BAND_GENERATORS,
   buildBuiltInCatalogue,
+  dropNonIntegerStatisticalWeights,
   type BandGenerator,
 } from '../../../shared/catalogue/registry'
 import { PhysicsError } from '../../../shared/physics/errors'
@@ -45,15 +47,79 @@ describe('buildBuiltInCatalogue', () => {
     catalogue.bands.forEach((band, b) => {
       const own = catalogue.lines.filter((_, i) => catalogue.lineBandIndex[i] === b)
       expect(own.length).toBe(band.lineCount)
-      expect(Math.min(...own.map((l) => l.wavenumberCm))).toBe(band.minWavenumberCm)
-      expectRelativeClose(
-        band.intensitySumCmPerMolecule,
-        band.publishedBandIntensityCmPerMolecule!,
-        1e-9,
-        band.id,
-      )
+      let min = Infinity
+      let max = -Infinity
+      let sum = 0
+      for (const line of own) {
+        min = Math.min(min, line.wavenumberCm)
+        max = Math.max(max, line.wavenumberCm)
+        sum += line.intensityCmPerMolecule
+      }
+      expect(min).toBe(band.minWavenumberCm)
+      expect(max).toBe(band.maxWavenumberCm)
+      expectRelativeClose(sum, band.intensitySumCmPerMolecule, 1e-12, band.id)
+      // Generators normalise each band to its adopted band intensity (generator requirement).
+      if (band.publishedBandIntensityCmPerMolecule !== null) {
+        expectRelativeClose(sum, band.publishedBandIntensityCmPerMolecule, 1e-9, band.id)
+      }
       expect(band.source.length).toBeGreaterThan(10)
     })
+  })
+
+  it('when the asymmetric generators are wired in, lists H2O, O3 and CH4 bands after the linear ones', () => {
+    expect(BUILT_IN_BAND_GENERATORS.length).toBe(
+      LINEAR_BAND_GENERATORS.length + ASYMMETRIC_BAND_GENERATORS.length,
+    )
+    expect(ASYMMETRIC_BAND_GENERATORS.map((g) => g.id)).toEqual([
+      'h2o-161-rotation',
+      'h2o-161-nu2',
+      'o3-666-nu3',
+      'o3-666-nu1',
+      'ch4-211-nu4',
+    ])
+    const byId = new Map(catalogue.bands.map((band) => [band.id, band]))
+    for (const id of [
+      'h2o-161-rotation',
+      'h2o-161-nu2',
+      'o3-666-nu3',
+      'o3-666-nu1',
+      'ch4-211-nu4',
+    ]) {
+      expect(byId.get(id)?.lineCount, id).toBeGreaterThan(50)
+    }
+    // Lines of each band carry their own molecule (ids 1 H2O, 3 O3, 6 CH4; database numbering).
+    catalogue.lines.forEach((line, i) => {
+      expect(line.moleculeId).toBe(catalogue.bands[catalogue.lineBandIndex[i]].moleculeId)
+    })
+  })
+
+  it('when the H2O pure-rotation band is summed, is within 3 % of the rigid-rotor sum rule', () => {
+    // ΣS = (8π³/3hc)μ²(A + C) = 5.32e-17 cm/molecule (REFERENCES §4, COMPUTED; "real value a few %
+    // different because of centrifugal distortion"): 3 %.
+    const band = catalogue.bands.find((b) => b.id === 'h2o-161-rotation')!
+    expect(band.publishedBandIntensityCmPerMolecule).toBeNull()
+    expectRelativeClose(band.intensitySumCmPerMolecule, 5.32e-17, 0.03)
+  })
+
+  it('when CH4 lines carry the non-integer average upper weight, drops it and keeps A', () => {
+    // File convention: integer statistical weights (catalogue-file.ts); CH4 g′ = (4/3)(2J′+1)².
+    const lines = [
+      { ...fakeLine(1300), upperStatisticalWeight: 4 / 3, lowerStatisticalWeight: 5 },
+      { ...fakeLine(1301), upperStatisticalWeight: 12, lowerStatisticalWeight: 2.5 },
+    ]
+    dropNonIntegerStatisticalWeights(lines)
+    expect(lines[0].upperStatisticalWeight).toBeUndefined()
+    expect(lines[0].lowerStatisticalWeight).toBe(5)
+    expect(lines[1].upperStatisticalWeight).toBe(12)
+    expect(lines[1].lowerStatisticalWeight).toBeUndefined()
+    expect(lines[0].einsteinAPerS).toBe(1)
+    const ch4 = catalogue.lines.filter((line) => line.moleculeId === 6)
+    expect(ch4.length).toBeGreaterThan(0)
+    for (const line of ch4) {
+      if (line.upperStatisticalWeight !== undefined) {
+        expect(Number.isInteger(line.upperStatisticalWeight)).toBe(true)
+      }
+    }
   })
 
   it('when another generator is plugged in, merges its lines in wavenumber order', () => {
