@@ -1,9 +1,13 @@
 // tauline — command-line access to the Tauline engine. See README "Command line".
 import { CliError } from './args'
+import { computeCommand, computeHelp } from './compute-command'
+import { forcingCommand, forcingHelp } from './forcing-command'
 import { planckCommand, planckHelp } from './planck-command'
 
 const commands: Record<string, { run: (argv: string[]) => void | Promise<void>; help: string }> = {
   planck: { run: planckCommand, help: planckHelp },
+  compute: { run: computeCommand, help: computeHelp },
+  forcing: { run: forcingCommand, help: forcingHelp },
 }
 
 const usage = `Usage: tauline <command> [options]   (add --json for machine-readable output)
