@@ -2,7 +2,7 @@
 import { loadConfig } from '../server/config'
 import { createSequelize } from '../server/db'
 import { DEMO_ORGANISATION } from '../server/demo/demo-team'
-import { seedDemoTeam } from '../server/demo/seed'
+import { seedDemoTeam, seedDemoWorkspace } from '../server/demo/seed'
 import { loadEnvFile } from '../server/env-file'
 import { initModels } from '../server/models/index'
 
@@ -16,6 +16,8 @@ try {
   } else {
     const { created } = await seedDemoTeam(config.demoPassword)
     process.stderr.write(`[tauline] demo team of ${DEMO_ORGANISATION}: ${created} account(s) created\n`)
+    const workspace = await seedDemoWorkspace()
+    process.stderr.write(`[tauline] demo workspace: ${workspace.profiles} profile(s), ${workspace.mixtures} mixture(s) created\n`)
   }
 } finally {
   await sequelize.close()

@@ -46,6 +46,8 @@ export interface ProfileDerived {
   tropopausePressurePa: number
   tropopauseHeightM: number
   tropopauseMethod: string
+  /** Gases with a non-zero amount somewhere in the column (missing in profiles saved before it existed). */
+  gasesPresent?: string[]
 }
 
 export interface ProfileSummary {

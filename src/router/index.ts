@@ -24,7 +24,7 @@ export const ROUTE = {
 
 const AreaView = () => import('@/views/AreaView.vue')
 
-const workAreas: Area[] = ['profiles', 'catalogues', 'runs', 'comparisons', 'observations', 'reviews']
+const workAreas: Area[] = ['catalogues', 'comparisons', 'observations', 'reviews']
 
 export const routes: RouteRecordRaw[] = [
   { path: '/sign-in', name: ROUTE.signIn, component: SignInView, meta: { public: true } },
@@ -33,6 +33,10 @@ export const routes: RouteRecordRaw[] = [
     component: () => import('@/layouts/TheAppLayout.vue'),
     children: [
       { path: '', name: ROUTE.dashboard, component: () => import('@/views/DashboardView.vue'), meta: { area: 'dashboard' } },
+      { path: 'profiles', name: 'profiles', component: () => import('@/views/ProfilesView.vue'), meta: { area: 'profiles' } },
+      { path: 'profiles/new', name: 'profile-new', component: () => import('@/views/ProfileEditorView.vue'), meta: { area: 'profiles' } },
+      { path: 'profiles/upload', name: 'profile-upload', component: () => import('@/views/SoundingUploadView.vue'), meta: { area: 'profiles' } },
+      { path: 'profiles/:id(\\d+)', name: 'profile', component: () => import('@/views/ProfileEditorView.vue'), meta: { area: 'profiles' } },
       ...workAreas.map((area) => ({
         path: area,
         name: area,
@@ -40,6 +44,9 @@ export const routes: RouteRecordRaw[] = [
         props: { area },
         meta: { area },
       })),
+      { path: 'runs', name: 'runs', component: () => import('@/views/RunsView.vue'), meta: { area: 'runs' } },
+      { path: 'runs/new', name: 'run-new', component: () => import('@/views/NewRunView.vue'), meta: { area: 'runs' } },
+      { path: 'runs/:id(\\d+)', name: 'run', component: () => import('@/views/RunView.vue'), props: true, meta: { area: 'runs' } },
       { path: 'mixtures', name: 'mixtures', component: () => import('@/views/MixturesView.vue'), meta: { area: 'mixtures' } },
       { path: 'admin', name: ROUTE.admin, component: () => import('@/views/AdminView.vue'), meta: { area: 'admin' } },
       { path: 'help', name: ROUTE.help, component: () => import('@/views/HelpView.vue'), meta: { area: 'help' } },

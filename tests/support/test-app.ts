@@ -6,7 +6,7 @@ import { loadConfig, type AppConfig } from '../../server/config'
 import { createPgPool, createSequelize } from '../../server/db'
 import { createLogger } from '../../server/logger'
 import { initModels } from '../../server/models/index'
-import { seedDemoTeam } from '../../server/demo/seed'
+import { seedDemoTeam, seedDemoWorkspace } from '../../server/demo/seed'
 import { DEMO_TEAM } from '../../server/demo/demo-team'
 import type { Role } from '../../shared/schemas/auth'
 import { startRunSystem, type RunSystem } from '../../server/runs/run-system'
@@ -33,6 +33,8 @@ export async function createTestApp(
     clientDistDir?: string
     /** Start the run queue with this many chunk threads in-process (0 = queue only). */
     runs?: { threads: number }
+    /** Also seed the demo profiles, soundings and mixtures. */
+    seedWorkspace?: boolean
   } = {},
 ): Promise<TestApp> {
   const db = await createTestDatabase()
@@ -47,6 +49,7 @@ export async function createTestApp(
   const sequelize = createSequelize(config.databaseUrl)
   initModels(sequelize)
   await seedDemoTeam(TEST_PASSWORD)
+  if (options.seedWorkspace) await seedDemoWorkspace()
   const sessionPool = createPgPool(config.databaseUrl)
   const logger = createLogger('silent')
   const runSystem = options.runs ? await startRunSystem(config, sequelize, logger, options.runs.threads) : undefined

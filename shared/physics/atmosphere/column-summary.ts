@@ -7,7 +7,7 @@
  * CODATA 2018).
  */
 import { AVOGADRO_PER_MOL, DOBSON_UNIT_MOLECULES_PER_CM2, WATER_MOLAR_MASS_KG_PER_MOL } from '../constants'
-import type { AtmosphereProfile } from '../types'
+import { GAS_IDS, type AtmosphereProfile, type GasId } from '../types'
 import { levelsToLayers, totalGasColumnsMoleculesPerCm2 } from './layers'
 import { findTropopause } from './tropopause'
 
@@ -21,6 +21,8 @@ export interface ColumnSummary {
   tropopausePressurePa: number
   tropopauseHeightM: number
   tropopauseMethod: string
+  /** Gases with a non-zero amount somewhere in the column. */
+  gasesPresent: GasId[]
 }
 
 export function summariseColumn(profile: AtmosphereProfile): ColumnSummary {
@@ -37,5 +39,6 @@ export function summariseColumn(profile: AtmosphereProfile): ColumnSummary {
     tropopausePressurePa: tropopause.pressurePa,
     tropopauseHeightM: tropopause.heightM,
     tropopauseMethod: tropopause.method,
+    gasesPresent: GAS_IDS.filter((g) => profile.levels.some((l) => (l.vmr[g] ?? 0) > 0)),
   }
 }

@@ -1,0 +1,65 @@
+import { existsSync } from 'node:fs'
+import type { AddressInfo } from 'node:net'
+import type { Server } from 'node:http'
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { launchBrowser } from '../support/browser'
+import { createTestApp, type TestApp } from '../support/test-app'
+
+let t: TestApp
+let server: Server
+let base: string
+let browser: Awaited<ReturnType<typeof launchBrowser>>
+
+beforeAll(async () => {
+  if (!existsSync('dist/index.html')) throw new Error('Build the client first (npx vite build); npm test does it.')
+  t = await createTestApp({ clientDistDir: 'dist', runs: { threads: 1 }, seedWorkspace: true })
+  server = t.app.listen(0, '127.0.0.1')
+  await new Promise((resolve) => server.once('listening', resolve))
+  base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`
+  browser = await launchBrowser()
+})
+
+afterAll(async () => {
+  await browser?.close()
+  await new Promise((resolve) => server?.close(resolve))
+  await t?.close()
+})
+
+describe('a run from the demo data', () => {
+  it('is submitted from the form, its progress bar reaches 100 %, and its results appear', async () => {
+    const page = await browser.context.newPage()
+    await page.goto(`${base}/sign-in`)
+    await page.fill('input[name=email]', t.account('analyst').email)
+    await page.fill('input[name=password]', t.account('analyst').password)
+    await page.click('[data-test=sign-in-submit]')
+    await page.waitForSelector('[data-test=dashboard]')
+
+    await page.goto(`${base}/runs/new`)
+    await page.waitForSelector('[data-test=new-run-page]')
+    // A narrow window around the CO₂ band centre keeps the test quick.
+    await page.fill('input[name=startCm]', '660')
+    await page.fill('input[name=endCm]', '680')
+    await page.fill('input[name=chunkWidth]', '5')
+    await page.fill('input[name=runName]', 'Browser test run')
+    await page.locator('input[name=runName]').press('Tab')
+    await page.click('[data-test=submit-run]')
+
+    await page.waitForSelector('[data-test=run-page]')
+    expect(await page.textContent('[data-test=run-page] h2')).toContain('Browser test run')
+    // Progress fills in chunk by chunk; the bar ends at 100 % and the results appear under it.
+    await page.waitForSelector('[data-test=run-progress]')
+    await page.waitForSelector('[data-test=run-summary]', { timeout: 120_000 })
+    expect(await page.getAttribute('[data-test=run-progress] [data-percent]', 'data-percent')).toBe('100')
+    expect(await page.textContent('[data-test=run-progress-text]')).toMatch(/4 of 4 chunks/)
+    const summary = await page.textContent('[data-test=run-summary]')
+    expect(summary).toMatch(/Outgoing longwave radiation\s*[\d.]+/)
+    expect(await page.locator('[data-test=chart-frame]').count()).toBeGreaterThanOrEqual(4)
+    const status = await page.getAttribute('[data-status]', 'data-status')
+    expect(status).toBe('succeeded')
+
+    await page.goto(`${base}/runs`)
+    await page.waitForSelector('[data-test=runs-page] [data-run-id]')
+    expect(await page.textContent('[data-test=runs-page]')).toContain('Browser test run')
+    await page.close()
+  })
+})
