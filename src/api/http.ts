@@ -37,13 +37,15 @@ type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE'
 /** The one HTTP client of the app: JSON in and out, CSRF header on writes, errors as ApiError. */
 export async function request<T>(method: Method, path: string, body?: unknown, retried = false): Promise<T> {
   const headers: Record<string, string> = { Accept: 'application/json' }
-  if (body !== undefined) headers['Content-Type'] = 'application/json'
+  // A FormData body (file uploads) goes as it is: the browser sets the multipart boundary.
+  const isForm = typeof FormData !== 'undefined' && body instanceof FormData
+  if (body !== undefined && !isForm) headers['Content-Type'] = 'application/json'
   if (method !== 'GET') headers['x-csrf-token'] = csrfToken ?? (await fetchCsrfToken())
   const res = await fetch(`/api${path}`, {
     method,
     headers,
     credentials: 'same-origin',
-    body: body === undefined ? undefined : JSON.stringify(body),
+    body: body === undefined ? undefined : isForm ? (body as FormData) : JSON.stringify(body),
   })
   if (res.status === 204) return undefined as T
   const text = await res.text()
@@ -65,4 +67,6 @@ export const http = {
   patch: <T>(path: string, body: unknown) => request<T>('PATCH', path, body),
   put: <T>(path: string, body: unknown) => request<T>('PUT', path, body),
   delete: <T>(path: string) => request<T>('DELETE', path),
+  /** POST a multipart form (a file and its fields), with the same CSRF and error handling. */
+  upload: <T>(path: string, form: FormData) => request<T>('POST', path, form),
 }
