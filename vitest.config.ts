@@ -13,7 +13,7 @@ export default defineConfig({
   },
   test: {
     projects: [
-      { extends: true, test: { name: 'unit', include: ['tests/unit/**/*.test.ts'], environment: 'node' } },
+      { extends: true, test: { name: 'unit', include: ['tests/unit/**/*.test.ts'], environment: 'node', testTimeout: 30_000 } },
       { extends: true, test: { name: 'client', include: ['tests/client/**/*.test.ts'], environment: 'happy-dom' } },
       {
         extends: true,

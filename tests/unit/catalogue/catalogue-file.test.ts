@@ -10,7 +10,7 @@ import {
 } from '../../../shared/catalogue/catalogue-file'
 import { buildBuiltInCatalogue } from '../../../shared/catalogue/registry'
 import { PhysicsError } from '../../../shared/physics/errors'
-import { expectRelativeClose } from './expect-close'
+import { expectRelativeClose } from '../../support/expect-close'
 
 const catalogue = buildBuiltInCatalogue()
 const text = serialiseCatalogue(catalogue)

@@ -6,7 +6,7 @@ import {
 import { PhysicsError } from '../../../shared/physics/errors'
 import { approximatePartitionFunction } from '../../../shared/physics/spectroscopy/partition-function'
 import { getIsotopologue } from '../../../shared/physics/spectroscopy/isotopologue-lookup'
-import { expectRelativeClose } from './expect-close'
+import { expectRelativeClose } from '../../support/expect-close'
 
 describe('createBuiltInPartitionFunctionLookup', () => {
   const lookup = createBuiltInPartitionFunctionLookup()

@@ -11,7 +11,7 @@ import {
 } from '../../../shared/catalogue/registry'
 import { PhysicsError } from '../../../shared/physics/errors'
 import type { SpectralLine } from '../../../shared/physics/spectroscopy/line'
-import { expectRelativeClose } from './expect-close'
+import { expectRelativeClose } from '../../support/expect-close'
 
 function fakeLine(wavenumberCm: number): SpectralLine {
   return {

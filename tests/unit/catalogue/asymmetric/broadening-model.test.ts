@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest'
 import { PhysicsError } from '../../../../shared/physics/errors'
 import { lineBroadening } from '../../../../shared/catalogue/asymmetric/broadening-model'
 import type { BroadeningModel } from '../../../../shared/catalogue/asymmetric/constants/types'
-import { expectRelativeClose } from './expect-close'
+import { expectRelativeClose } from '../../../support/expect-close'
 
 const MODEL: BroadeningModel = {
   airAtJ0CmPerAtm: 0.1,

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { PhysicsError } from '../../../../shared/physics/errors'
 import { symmetricEigen } from '../../../../shared/catalogue/asymmetric/jacobi-eigen'
-import { expectAbsoluteClose, seededRandom } from './expect-close'
+import { expectAbsoluteClose, seededRandom } from '../../../support/expect-close'
 
 function randomSymmetric(n: number, random: () => number): Float64Array {
   const a = new Float64Array(n * n)

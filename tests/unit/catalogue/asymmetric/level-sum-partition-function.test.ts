@@ -5,7 +5,7 @@ import { defaultPartitionFunctionLookup } from '../../../../shared/physics/spect
 import { createLevelSumPartitionFunction } from '../../../../shared/catalogue/asymmetric/level-sum-partition-function'
 import { createWaterPartitionFunction } from '../../../../shared/catalogue/asymmetric/water'
 import { createMethanePartitionFunction } from '../../../../shared/catalogue/asymmetric/methane'
-import { expectRelativeClose } from './expect-close'
+import { expectRelativeClose } from '../../../support/expect-close'
 
 describe('createLevelSumPartitionFunction', () => {
   it('when given two levels and one vibrational level, returns (g₀ + g₁e^{−c₂E₁/T})(1 + e^{−c₂G/T})', () => {

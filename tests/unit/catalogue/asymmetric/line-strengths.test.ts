@@ -14,7 +14,7 @@ import { asymmetricTopLevels } from '../../../../shared/catalogue/asymmetric/wat
 import { logFactorialTable } from '../../../../shared/catalogue/asymmetric/wigner-3j'
 import { WATER_STATES } from '../../../../shared/catalogue/asymmetric/constants/water'
 import type { TransitionType } from '../../../../shared/catalogue/asymmetric/constants/types'
-import { expectRelativeClose } from './expect-close'
+import { expectRelativeClose } from '../../../support/expect-close'
 
 const lf = logFactorialTable(200)
 const WATER_000 = WATER_STATES[0].constants

@@ -8,7 +8,7 @@ import {
   sphericalTopBranchFraction,
 } from '../../../../shared/catalogue/asymmetric/methane'
 import { METHANE_NU4 } from '../../../../shared/catalogue/asymmetric/constants/methane'
-import { expectAbsoluteClose, expectRelativeClose } from './expect-close'
+import { expectAbsoluteClose, expectRelativeClose } from '../../../support/expect-close'
 
 describe('methaneSpinWeightedDegeneracy', () => {
   it('when J = 0 … 6, returns 5, 3, 5, 11, 13, 11, 21', () => {

@@ -8,7 +8,7 @@ import {
   generateOzoneLines,
 } from '../../../../shared/catalogue/asymmetric/ozone'
 import { OZONE_STATES } from '../../../../shared/catalogue/asymmetric/constants/ozone'
-import { expectAbsoluteClose, expectRelativeClose } from './expect-close'
+import { expectAbsoluteClose, expectRelativeClose } from '../../../support/expect-close'
 
 let lines: SpectralLine[]
 let nu3: SpectralLine[]

@@ -8,7 +8,7 @@ import {
   createWaterPartitionFunction,
   generateWaterLines,
 } from '../../../../shared/catalogue/asymmetric/water'
-import { expectAbsoluteClose, expectRelativeClose } from './expect-close'
+import { expectAbsoluteClose, expectRelativeClose } from '../../../support/expect-close'
 
 /** GHz → cm⁻¹ (c = 29.9792458 GHz cm, exact). */
 const GHZ_TO_CM = 1 / 29.9792458

@@ -8,7 +8,7 @@ import {
 } from '../../../../shared/catalogue/asymmetric/watson-hamiltonian'
 import type { WatsonConstantsCm } from '../../../../shared/catalogue/asymmetric/constants/types'
 import { WATER_STATES } from '../../../../shared/catalogue/asymmetric/constants/water'
-import { expectAbsoluteClose } from './expect-close'
+import { expectAbsoluteClose } from '../../../support/expect-close'
 
 /** Rigid rotor with the water ground-state A, B, C of REFERENCES §4 (MEMORY). */
 const RIGID: WatsonConstantsCm = {

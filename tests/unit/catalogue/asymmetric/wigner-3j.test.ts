@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { PhysicsError } from '../../../../shared/physics/errors'
 import { logFactorialTable, wigner3j } from '../../../../shared/catalogue/asymmetric/wigner-3j'
-import { expectAbsoluteClose } from './expect-close'
+import { expectAbsoluteClose } from '../../../support/expect-close'
 
 const lf = logFactorialTable(300)
 

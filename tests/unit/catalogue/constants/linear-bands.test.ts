@@ -4,7 +4,7 @@ import {
   evaluateBroadening,
   CO2_BROADENING,
 } from '../../../../shared/catalogue/constants/linear-broadening'
-import { expectAbsoluteClose, expectRelativeClose } from '../expect-close'
+import { expectAbsoluteClose, expectRelativeClose } from '../../../support/expect-close'
 
 // Band centres of REFERENCES §3b (COMPUTED there from the level energies; they agree with the
 // literature centres to ≈0.01 cm⁻¹, MEMORY). 01101–00001 rests on the VERIFIED 667.3799.

@@ -6,7 +6,7 @@ import {
   type LinearTransition,
 } from '../../../../shared/catalogue/linear/band-generator'
 import { PhysicsError } from '../../../../shared/physics/errors'
-import { expectAbsoluteClose, expectRelativeClose } from '../expect-close'
+import { expectAbsoluteClose, expectRelativeClose } from '../../../support/expect-close'
 
 function band(id: string) {
   const found = LINEAR_BANDS.find((b) => b.id === id)

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { PhysicsError } from '../../../../shared/physics/errors'
 import { einsteinAFromIntensity } from '../../../../shared/catalogue/linear/einstein-a'
-import { expectRelativeClose } from '../expect-close'
+import { expectRelativeClose } from '../../../support/expect-close'
 
 describe('einsteinAFromIntensity', () => {
   it('when given the REFERENCES §9 band numbers, returns A ≈ 1.52 s⁻¹', () => {

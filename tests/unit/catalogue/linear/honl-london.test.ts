@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { PhysicsError } from '../../../../shared/physics/errors'
 import { honlLondonFactor } from '../../../../shared/catalogue/linear/honl-london'
-import { expectRelativeClose } from '../expect-close'
+import { expectRelativeClose } from '../../../support/expect-close'
 
 describe('honlLondonFactor', () => {
   it('when summed over P, Q and R, returns 2J″+1 for every l″ and Δl (sum rule, REFERENCES §3c)', () => {

@@ -7,7 +7,7 @@ import {
   linearPartitionFunction,
   linearPartitionFunctionLookup,
 } from '../../../../shared/catalogue/linear/partition-function'
-import { expectRelativeClose } from '../expect-close'
+import { expectRelativeClose } from '../../../support/expect-close'
 
 // Published totals Q(296), isotopologue table of the public spectroscopic database
 // (Gordon et al. 2022, JQSRT 277, 107949), VERIFIED in REFERENCES §3a (CO2) and §4 (N2O).

@@ -6,7 +6,7 @@ import {
   rovibrationalEnergyCm,
   sublevelRotationalConstantCm,
 } from '../../../../shared/catalogue/linear/rotational-energy'
-import { expectAbsoluteClose } from '../expect-close'
+import { expectAbsoluteClose } from '../../../support/expect-close'
 
 // CO2 constants of REFERENCES §3b (MEMORY): B₀ = 0.3902189, D₀ = 1.333e-7; 01101: G = 667.3799
 // (VERIFIED), B_e = 0.390639, B_f = 0.391254.

@@ -12,7 +12,7 @@ import {
   type Complex,
 } from '../../../../shared/physics/spectroscopy/faddeeva'
 import fixture from '../fixtures/faddeeva.json'
-import { expectRelativeClose } from './expect-relative'
+import { expectRelativeClose } from '../../../support/expect-close'
 
 // REFERENCES §8a: w(x + iy) computed with scipy.special.wofz (agrees with Abramowitz & Stegun
 // Table 7.9 to its 6 decimals, from memory). Columns x, y, Re w, Im w.

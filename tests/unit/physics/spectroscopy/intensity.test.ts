@@ -7,7 +7,7 @@ import {
 import { getIsotopologue } from '../../../../shared/physics/spectroscopy/isotopologue-lookup'
 import { toLineTable, type SpectralLine } from '../../../../shared/physics/spectroscopy/line'
 import { approximatePartitionFunction } from '../../../../shared/physics/spectroscopy/partition-function'
-import { expectRelativeClose } from './expect-relative'
+import { expectRelativeClose } from '../../../support/expect-close'
 
 const constantQ = () => 1
 

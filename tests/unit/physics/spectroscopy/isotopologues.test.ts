@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { ISOTOPOLOGUES } from '../../../../shared/physics/spectroscopy/isotopologues'
 import { findIsotopologue } from '../../../../shared/physics/spectroscopy/isotopologue-lookup'
-import { expectRelativeClose } from './expect-relative'
+import { expectRelativeClose } from '../../../support/expect-close'
 
 // Atomic masses, u: 2016 Atomic Mass Evaluation (Wang et al. 2017, Chinese Phys. C 41, 030003;
 // from memory). 12C is exact by definition.

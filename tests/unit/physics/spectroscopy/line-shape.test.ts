@@ -10,7 +10,7 @@ import {
   voigtProfile,
   voigtProfileAccurate,
 } from '../../../../shared/physics/spectroscopy/line-shape'
-import { expectRelativeClose } from './expect-relative'
+import { expectRelativeClose } from '../../../support/expect-close'
 
 /** Composite Simpson rule on [a, b] with n (even) intervals. */
 function simpson(f: (x: number) => number, a: number, b: number, n: number): number {

@@ -11,7 +11,7 @@ import {
   defaultPartitionFunctionLookup,
   vibrationalPartitionFunction,
 } from '../../../../shared/physics/spectroscopy/partition-function'
-import { expectRelativeClose } from './expect-relative'
+import { expectRelativeClose } from '../../../support/expect-close'
 
 describe('vibrationalPartitionFunction', () => {
   it('when given the CO2 626 levels at 296 K, returns 1.0845', () => {

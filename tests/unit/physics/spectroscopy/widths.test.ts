@@ -11,7 +11,7 @@ import {
   pressureShiftedWavenumbers,
   voigtHalfWidthCm,
 } from '../../../../shared/physics/spectroscopy/widths'
-import { expectRelativeClose } from './expect-relative'
+import { expectRelativeClose } from '../../../support/expect-close'
 
 /** Asserts that `value` rounds to `printed` at the printed number of significant digits. */
 function expectRoundsTo(value: number, printed: number, significantDigits: number): void {
