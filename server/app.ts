@@ -13,6 +13,7 @@ import { createPassport } from './auth/passport'
 import type { Logger } from './logger'
 import { apiNotFound, errorHandler } from './middlewares/error-handler'
 import { authRoutes } from './routes/auth.routes'
+import { cataloguesRoutes } from './routes/catalogues.routes'
 import { healthRoutes } from './routes/health.routes'
 import { mixturesRoutes } from './routes/mixtures.routes'
 import { profilesRoutes } from './routes/profiles.routes'
@@ -92,6 +93,7 @@ export function createApp({ config, sequelize, sessionPool, logger, clientDistDi
   api.use('/admin/users', usersRoutes())
   api.use('/profiles', profilesRoutes())
   api.use('/mixtures', mixturesRoutes())
+  api.use('/catalogues', cataloguesRoutes())
   api.use('/runs', runsRoutes(sequelize, getRunQueue ?? (() => undefined)))
   api.use(apiNotFound)
   app.use('/api', api)

@@ -1,5 +1,6 @@
 // tauline — command-line access to the Tauline engine. See README "Command line".
 import { CliError } from './args'
+import { catalogueCommand, catalogueHelp } from './catalogue-command'
 import { computeCommand, computeHelp } from './compute-command'
 import { forcingCommand, forcingHelp } from './forcing-command'
 import { planckCommand, planckHelp } from './planck-command'
@@ -8,6 +9,7 @@ const commands: Record<string, { run: (argv: string[]) => void | Promise<void>; 
   planck: { run: planckCommand, help: planckHelp },
   compute: { run: computeCommand, help: computeHelp },
   forcing: { run: forcingCommand, help: forcingHelp },
+  catalogue: { run: catalogueCommand, help: catalogueHelp },
 }
 
 const usage = `Usage: tauline <command> [options]   (add --json for machine-readable output)

@@ -3,6 +3,7 @@ import * as m0002 from './0002-create-session'
 import * as m0003 from './0003-create-profiles'
 import * as m0004 from './0004-create-gas-mixtures'
 import * as m0005 from './0005-create-runs'
+import * as m0006 from './0006-create-line-catalogues'
 
 /** Every migration in order. Add new ones at the end; never edit one that has shipped. */
 export const migrations = [
@@ -11,4 +12,5 @@ export const migrations = [
   { name: '0003-create-profiles', ...m0003 },
   { name: '0004-create-gas-mixtures', ...m0004 },
   { name: '0005-create-runs', ...m0005 },
+  { name: '0006-create-line-catalogues', ...m0006 },
 ]

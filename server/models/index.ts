@@ -1,5 +1,6 @@
 import type { Sequelize } from 'sequelize'
 import { GasMixture } from './gas-mixture.model'
+import { CatalogueLineBlock, LineCatalogue, initLineCatalogueModels } from './line-catalogue.model'
 import { Profile } from './profile.model'
 import { Run, RunChunk, RunResult } from './run.model'
 import { User } from './user.model'
@@ -19,7 +20,9 @@ export function initModels(sequelize: Sequelize) {
   Run.hasMany(RunChunk, { as: 'chunks', foreignKey: 'runId' })
   RunChunk.belongsTo(Run, { foreignKey: 'runId' })
   Run.hasOne(RunResult, { as: 'result', foreignKey: 'runId' })
+  initLineCatalogueModels(sequelize, User)
   return { User, Profile, GasMixture, Run, RunChunk, RunResult }
 }
 
 export { GasMixture, Profile, Run, RunChunk, RunResult, User }
+export { CatalogueLineBlock, LineCatalogue }

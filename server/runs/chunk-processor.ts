@@ -1,4 +1,5 @@
 import type { Sequelize } from 'sequelize'
+import { workerDatabaseOf } from '../catalogue/worker-database'
 import type { Logger } from '../logger'
 import { Run, RunChunk } from '../models/index'
 import { encodeChunkResult } from './chunk-codec'
@@ -54,7 +55,7 @@ export async function processChunkJob(deps: ChunkProcessorDeps, data: ChunkJobDa
 
   let outcome
   try {
-    outcome = await pool.run({ inputHash: run.inputHash, inputs: run.inputs, chunkIndex: data.chunkIndex })
+    outcome = await pool.run({ inputHash: run.inputHash, inputs: run.inputs, chunkIndex: data.chunkIndex, database: workerDatabaseOf(sequelize) })
   } catch (err) {
     const reason = `chunk ${data.chunkIndex} (${chunk.startCm}–${chunk.endCm} cm⁻¹) failed on ${workerId}: ${(err as Error).message}`
     await RunChunk.update({ status: 'failed', error: reason }, { where: { id: chunk.id } })

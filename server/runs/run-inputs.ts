@@ -5,7 +5,7 @@ import type { AtmosphereProfile } from '../../shared/physics/types'
 import type { CreateRunInput, RunInputs } from '../../shared/schemas/runs'
 import { ENGINE_VERSION } from '../../shared/version'
 import { AppError } from '../errors'
-import { loadBuiltInCatalogue } from '../catalogue/builtin-catalogue'
+import { runCatalogueOf } from '../catalogue/run-catalogue'
 import { GasMixture, Profile } from '../models/index'
 import { canonicalJson } from './canonical-json'
 
@@ -44,12 +44,12 @@ export async function snapshotRunInputs(input: CreateRunInput): Promise<{ inputs
       throw new AppError(400, 'VALIDATION_FAILED', (err as Error).message, { fields: [{ field: 'mixtureId', message: (err as Error).message }] })
     }
   }
-  const catalogue = loadBuiltInCatalogue()
+  const catalogue = await runCatalogueOf(input.catalogueId)
   return {
     inputs: {
       profile: { id: profile.id, name: profile.name, snapshot },
       mixture: mixture ? { id: mixture.id, name: mixture.name, gases: mixture.gases } : null,
-      catalogue: { id: catalogue.id, checksum: catalogue.checksum, generatorVersion: catalogue.generatorVersion, lineCount: catalogue.lineCount },
+      catalogue,
       settings,
       engineVersion: ENGINE_VERSION,
     },

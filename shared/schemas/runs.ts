@@ -37,7 +37,8 @@ export const createRunSchema = z.object({
   name: z.string().trim().max(160).optional(),
   profileId: z.number().int().positive(),
   mixtureId: z.number().int().positive().nullable().default(null),
-  catalogueId: z.literal('builtin').default('builtin'),
+  /** 'builtin' or the id of an imported line catalogue. */
+  catalogueId: z.union([z.literal('builtin'), z.number().int().positive()]).default('builtin'),
   settings: runSettingsSchema.default({} as never),
 })
 export type CreateRunInput = z.infer<typeof createRunSchema>

@@ -53,7 +53,7 @@ export async function fetchRun(id: number): Promise<RunDetail> {
   return (await http.get<{ run: RunDetail }>(`/runs/${id}`)).run
 }
 
-export async function createRun(input: { name?: string; profileId: number; mixtureId: number | null; settings: RunSettingsInput }): Promise<RunDetail> {
+export async function createRun(input: { name?: string; profileId: number; mixtureId: number | null; catalogueId?: 'builtin' | number; settings: RunSettingsInput }): Promise<RunDetail> {
   return (await http.post<{ run: RunDetail }>('/runs', input)).run
 }
 

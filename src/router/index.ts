@@ -24,7 +24,7 @@ export const ROUTE = {
 
 const AreaView = () => import('@/views/AreaView.vue')
 
-const workAreas: Area[] = ['catalogues', 'comparisons', 'observations', 'reviews']
+const workAreas: Area[] = ['comparisons', 'observations', 'reviews']
 
 export const routes: RouteRecordRaw[] = [
   { path: '/sign-in', name: ROUTE.signIn, component: SignInView, meta: { public: true } },
@@ -48,6 +48,8 @@ export const routes: RouteRecordRaw[] = [
       { path: 'runs/new', name: 'run-new', component: () => import('@/views/NewRunView.vue'), meta: { area: 'runs' } },
       { path: 'runs/:id(\\d+)', name: 'run', component: () => import('@/views/RunView.vue'), props: true, meta: { area: 'runs' } },
       { path: 'mixtures', name: 'mixtures', component: () => import('@/views/MixturesView.vue'), meta: { area: 'mixtures' } },
+      { path: 'catalogues', name: 'catalogues', component: () => import('@/views/CataloguesView.vue'), meta: { area: 'catalogues' } },
+      { path: 'catalogues/:id(builtin|\\d+)', name: 'catalogue', component: () => import('@/views/CatalogueView.vue'), props: true, meta: { area: 'catalogues' } },
       { path: 'admin', name: ROUTE.admin, component: () => import('@/views/AdminView.vue'), meta: { area: 'admin' } },
       { path: 'help', name: ROUTE.help, component: () => import('@/views/HelpView.vue'), meta: { area: 'help' } },
       { path: 'forbidden', name: ROUTE.forbidden, component: () => import('@/views/ForbiddenView.vue') },

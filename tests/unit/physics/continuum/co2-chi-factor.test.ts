@@ -6,7 +6,7 @@ import {
   co2ChiFactor,
 } from '../../../../shared/physics/continuum/co2-chi-factor'
 import { PhysicsError } from '../../../../shared/physics/errors'
-import { expectRelativeClose } from '../spectroscopy/expect-relative'
+import { expectRelativeClose } from '../../../support/expect-close'
 
 // Check values: COMPUTED from the piecewise form and coefficients of REFERENCES §3e (Perrin &
 // Hartmann 1989, JQSRT 42, 311; MEMORY-low) with Python 3 math.exp, 9 significant digits; they test

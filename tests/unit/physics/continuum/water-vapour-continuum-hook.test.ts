@@ -6,7 +6,7 @@ import {
   waterContinuumWindowWeight,
 } from '../../../../shared/physics/continuum/water-vapour-continuum'
 import type { AtmosphereLayer } from '../../../../shared/physics/types'
-import { expectRelativeClose } from '../spectroscopy/expect-relative'
+import { expectRelativeClose } from '../../../support/expect-close'
 
 function layerOf(
   waterColumn: number,

@@ -13,7 +13,7 @@ import {
 } from '../../../../shared/physics/continuum/water-vapour-continuum'
 import { PhysicsError } from '../../../../shared/physics/errors'
 import type { AtmosphereLayer } from '../../../../shared/physics/types'
-import { expectRelativeClose } from '../spectroscopy/expect-relative'
+import { expectRelativeClose } from '../../../support/expect-close'
 
 /** The REFERENCES §5 worked example: 1 km, 296 K, e = 20 hPa, P = 1013.25 hPa. */
 const PATH_LENGTH_CM = 1e5
