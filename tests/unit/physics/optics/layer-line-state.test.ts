@@ -12,7 +12,7 @@ import {
   type SpectralLine,
 } from '../../../../shared/physics/spectroscopy'
 import type { AtmosphereLayer } from '../../../../shared/physics/types'
-import { expectRelativeClose } from '../spectroscopy/expect-relative'
+import { expectRelativeClose } from '../../../support/expect-close'
 import { singleLayer } from './synthetic-band'
 
 function line(overrides: Partial<SpectralLine> = {}): SpectralLine {

@@ -5,7 +5,7 @@ import { computeReferenceOpticalDepth } from '../../../../shared/physics/optics/
 import type { ContinuumHook } from '../../../../shared/physics/optics/continuum'
 import { dopplerHalfWidthCm, toLineTable } from '../../../../shared/physics/spectroscopy'
 import fixture from '../fixtures/optics-reference.json'
-import { expectRelativeClose } from '../spectroscopy/expect-relative'
+import { expectRelativeClose } from '../../../support/expect-close'
 import {
   ATM_PA,
   bandAbsorptionCm,

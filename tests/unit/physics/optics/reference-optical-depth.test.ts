@@ -3,7 +3,7 @@ import { PhysicsError } from '../../../../shared/physics/errors'
 import { computeReferenceOpticalDepth } from '../../../../shared/physics/optics/reference-optical-depth'
 import { dopplerHalfWidthCm, toLineTable } from '../../../../shared/physics/spectroscopy'
 import fixture from '../fixtures/optics-reference.json'
-import { expectRelativeClose } from '../spectroscopy/expect-relative'
+import { expectRelativeClose } from '../../../support/expect-close'
 import { ATM_PA, co2Line, molarMassForDopplerWidth, trapezoid } from './optics-test-helpers'
 import { singleLayer } from './synthetic-band'
 

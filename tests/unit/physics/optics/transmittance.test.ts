@@ -7,7 +7,7 @@ import {
   layerTransmittance,
   opticalDepthFromTop,
 } from '../../../../shared/physics/optics/transmittance'
-import { expectRelativeClose } from '../spectroscopy/expect-relative'
+import { expectRelativeClose } from '../../../support/expect-close'
 
 describe('beerLambertTransmittance', () => {
   it('when τ = ln 2 vertically or τ = ln 2 / 2 at μ = 1/2, returns 1/2', () => {
