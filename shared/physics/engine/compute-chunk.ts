@@ -3,13 +3,39 @@
  * Schwarzschild solution through the layers, and the chunk's share of every output — fluxes
  * integrated over the chunk and spectra averaged into output bins.
  *
+ * Three spectral methods (settings.spectralMethod):
+ * - 'adaptive' (default): adaptive grid per chunk (fine only near the centres of lines that are
+ *   optically significant in some layer, see optics/adaptive-optical-depth.ts), masked multi-level
+ *   optics, point-by-point column solver (transfer/column-transfer.ts), outputs binned in blocks.
+ * - 'uniform': one uniform grid per chunk with the step tied to the narrowest line of any layer,
+ *   multi-level optics on that grid, layer-by-layer solver (the engine's first fast path).
+ * - 'reference': the brute-force yardstick — the same uniform grid with direct summation of every
+ *   line at every point (`computeReferenceOpticalDepth`) and the layer-by-layer solver.
+ *
  * A chunk depends only on the prepared inputs and its bounds, so it gives bit-identical numbers
  * on any thread or machine; band fluxes of a run are sums of chunk fluxes in chunk order.
  */
-import { computeChunkOpticalDepth } from '../optics/optical-depth'
+import { computeAdaptiveChunkOpticalDepth } from '../optics/adaptive-optical-depth'
+import { chooseUniformStepCm, computeChunkOpticalDepth } from '../optics/optical-depth'
+import { computeReferenceOpticalDepth } from '../optics/reference-optical-depth'
+import { createColumnTransferBlock, solveColumnTransfer } from '../transfer/column-transfer'
+import { endCorrectedTrapezoidWeights } from '../transfer/end-corrected-trapezoid'
 import { solveSchwarzschild } from '../transfer/schwarzschild'
 import { trapezoidWeightsCm } from '../transfer/spectral-integration'
 import type { ChunkBounds, PreparedComputation } from './prepare'
+
+/** Work done for one chunk (for benchmarks and logs; not needed to merge results). */
+export interface ChunkWorkStats {
+  spectralMethod: 'adaptive' | 'uniform' | 'reference'
+  /** (line, layer) pairs with a positive integrated optical depth in the chunk's line slice. */
+  lineLayerCount: number
+  /** Voigt-function evaluations of the optics. */
+  voigtEvaluations: number
+  /** Finest grid step, cm⁻¹. */
+  finestStepCm: number
+  /** Pairs dropped as negligible (adaptive method only). */
+  droppedLineLayerCount: number
+}
 
 export interface ChunkResult {
   chunkIndex: number
@@ -31,32 +57,245 @@ export interface ChunkResult {
   surfaceZenithRadianceBinned: Float64Array
   /** Bin-mean vertical transmittance from each level to space, [bin·nLevels + level]. */
   transmittanceToSpaceBinned: Float64Array
+  /** Work done (optional; not stored with the run). */
+  work?: ChunkWorkStats
 }
+
+/** Points solved per block of the column solver (bounds the scratch to ≈ 3 MB for 61 levels). */
+const BLOCK_POINTS = 2048
 
 /** Computes one chunk. Pure and deterministic. */
 export function computeChunk(prepared: PreparedComputation, chunk: ChunkBounds): ChunkResult {
+  const method = prepared.settings.spectralMethod ?? 'adaptive'
+  return method === 'adaptive'
+    ? computeAdaptiveChunk(prepared, chunk)
+    : computeUniformChunk(prepared, chunk, method)
+}
+
+/** Warmest of the levels and the surface, K (temperature of the negligible-pair flux bound). */
+function warmestTemperatureK(prepared: PreparedComputation): number {
+  let t = prepared.profile.surfaceTemperatureK
+  for (const level of prepared.levelTemperatureK) if (level > t) t = level
+  return t
+}
+
+function computeAdaptiveChunk(prepared: PreparedComputation, chunk: ChunkBounds): ChunkResult {
   const { settings, layers, levelTemperatureK, profile } = prepared
   const nLevels = levelTemperatureK.length
-  const nLayers = nLevels - 1
-
-  const optics = computeChunkOpticalDepth({
+  const adaptive = settings.adaptive ?? {}
+  const optics = computeAdaptiveChunkOpticalDepth({
     lines: prepared.lines,
     layers,
     startCm: chunk.startCm,
     endCm: chunk.endCm,
     options: {
       wingCutoffCm: settings.wingCutoffCm,
-      pointsPerHalfWidth: settings.pointsPerHalfWidth,
+      unitCm: settings.outputResolutionCm,
+      referenceTemperatureK: warmestTemperatureK(prepared),
+      significantPeakOpticalDepth: adaptive.significantPeakOpticalDepth,
+      pointsPerHalfWidth: adaptive.pointsPerHalfWidth,
+      gradingHalfWidths: adaptive.gradingHalfWidths,
+      maxCoarseStepCm: adaptive.maxCoarseStepCm,
+      negligibleFluxWPerM2PerCm: adaptive.negligibleFluxWPerM2PerCm,
+      negligibleHeatingKPerDayPerCm: adaptive.negligibleHeatingKPerDayPerCm,
     },
   })
-  const grid = optics.wavenumberCm
+  const grid = optics.grid
+  const nu = grid.wavenumberCm
+  const node = grid.nodeIndex
+  const nGrid = nu.length
+  // Output-bin edges are grid nodes: bin b spans nodes [b·E, (b + 1)·E].
+  const nodesPerBin = Math.round(settings.outputResolutionCm / grid.baseStepCm)
+  const binCount = chunk.binCount
+  // End-corrected trapezoid weights: the grid changes its step by factors of two.
+  const weights = endCorrectedTrapezoidWeights(node, nu, nodesPerBin, {
+    left: new Float64Array(nGrid),
+    right: new Float64Array(nGrid),
+  })
+
+  const fluxUpBinned = new Float64Array(binCount * nLevels)
+  const fluxDownBinned = new Float64Array(binCount * nLevels)
+  const transmittanceToSpaceBinned = new Float64Array(binCount * nLevels)
+  const toaNadirRadianceBinned = new Float64Array(binCount)
+  const surfaceZenithRadianceBinned = new Float64Array(binCount)
+  const binWidth = new Float64Array(binCount)
+
+  const input = {
+    wavenumberCm: nu,
+    layerOpticalDepth: optics.opticalDepth,
+    levelTemperatureK,
+    surfaceTemperatureK: profile.surfaceTemperatureK,
+    surfaceEmissivity: profile.surfaceEmissivity,
+    quadrature: prepared.quadrature,
+    layerSource: settings.layerSource,
+  }
+  const addToBin = (bin: number, w: number, j: number): void => {
+    binWidth[bin] += w
+    toaNadirRadianceBinned[bin] += w * block.toaNadirRadiance[j]
+    surfaceZenithRadianceBinned[bin] += w * block.surfaceZenithRadiance[j]
+    const base = bin * nLevels
+    const at = j * nLevels
+    for (let l = 0; l < nLevels; l++) {
+      fluxUpBinned[base + l] += w * block.fluxUp[at + l]
+      fluxDownBinned[base + l] += w * block.fluxDown[at + l]
+      transmittanceToSpaceBinned[base + l] += w * block.transmittanceToSpace[at + l]
+    }
+  }
+  const block = createColumnTransferBlock(
+    Math.min(BLOCK_POINTS, nGrid),
+    nLevels,
+    prepared.quadrature.mu.length,
+  )
+  for (let first = 0; first < nGrid; first += block.capacity) {
+    const count = Math.min(block.capacity, nGrid - first)
+    solveColumnTransfer(input, first, count, block)
+    for (let j = 0; j < count; j++) {
+      const i = first + j
+      // Each point counts towards the bin of the interval on its left and on its right (bin edges
+      // are grid points, so no interval straddles one).
+      const binLeft = i > 0 ? Math.floor(node[i - 1] / nodesPerBin) : -1
+      const binRight = i < nGrid - 1 ? Math.floor(node[i] / nodesPerBin) : -1
+      if (binLeft === binRight) {
+        if (binLeft >= 0) addToBin(binLeft, weights.left[i] + weights.right[i], j)
+      } else {
+        if (binLeft >= 0) addToBin(binLeft, weights.left[i], j)
+        if (binRight >= 0) addToBin(binRight, weights.right[i], j)
+      }
+    }
+  }
+
+  // Band fluxes are the sums of the bin integrals; then bin integrals become bin means (the
+  // weights of a bin add up to its width: the end corrections sum to zero).
+  const fluxUpWPerM2 = new Float64Array(nLevels)
+  const fluxDownWPerM2 = new Float64Array(nLevels)
+  for (let bin = 0; bin < binCount; bin++) {
+    const base = bin * nLevels
+    for (let l = 0; l < nLevels; l++) {
+      fluxUpWPerM2[l] += fluxUpBinned[base + l]
+      fluxDownWPerM2[l] += fluxDownBinned[base + l]
+    }
+  }
+  normaliseBins(
+    binWidth,
+    nLevels,
+    fluxUpBinned,
+    fluxDownBinned,
+    transmittanceToSpaceBinned,
+    toaNadirRadianceBinned,
+    surfaceZenithRadianceBinned,
+  )
+  return {
+    chunkIndex: chunk.index,
+    startCm: chunk.startCm,
+    endCm: chunk.endCm,
+    firstBin: chunk.firstBin,
+    binCount,
+    gridPointCount: nGrid,
+    fluxUpWPerM2,
+    fluxDownWPerM2,
+    fluxUpBinned,
+    fluxDownBinned,
+    toaNadirRadianceBinned,
+    surfaceZenithRadianceBinned,
+    transmittanceToSpaceBinned,
+    work: {
+      spectralMethod: 'adaptive',
+      lineLayerCount: optics.stats.activeLineLayerCount,
+      voigtEvaluations: optics.stats.voigtEvaluations,
+      finestStepCm: optics.stats.finestStepCm,
+      droppedLineLayerCount: optics.stats.droppedLineLayerCount,
+    },
+  }
+}
+
+/** Divides bin integrals by the bin widths (bins without points stay 0). */
+function normaliseBins(
+  binWidth: Float64Array,
+  nLevels: number,
+  fluxUp: Float64Array,
+  fluxDown: Float64Array,
+  transmittance: Float64Array,
+  toa: Float64Array,
+  surface: Float64Array,
+): void {
+  for (let bin = 0; bin < binWidth.length; bin++) {
+    const inv = binWidth[bin] > 0 ? 1 / binWidth[bin] : 0
+    toa[bin] *= inv
+    surface[bin] *= inv
+    const base = bin * nLevels
+    for (let l = 0; l < nLevels; l++) {
+      fluxUp[base + l] *= inv
+      fluxDown[base + l] *= inv
+      transmittance[base + l] *= inv
+    }
+  }
+}
+
+function computeUniformChunk(
+  prepared: PreparedComputation,
+  chunk: ChunkBounds,
+  method: 'uniform' | 'reference',
+): ChunkResult {
+  const { settings, layers, levelTemperatureK, profile } = prepared
+  const nLevels = levelTemperatureK.length
+  const nLayers = nLevels - 1
+  const opticsOptions = {
+    wingCutoffCm: settings.wingCutoffCm,
+    pointsPerHalfWidth: settings.pointsPerHalfWidth,
+  }
+  let grid: Float64Array
+  let opticalDepth: Float64Array[]
+  let work: ChunkWorkStats
+  if (method === 'uniform') {
+    const optics = computeChunkOpticalDepth({
+      lines: prepared.lines,
+      layers,
+      startCm: chunk.startCm,
+      endCm: chunk.endCm,
+      options: opticsOptions,
+    })
+    grid = optics.wavenumberCm
+    opticalDepth = optics.opticalDepth
+    work = {
+      spectralMethod: method,
+      lineLayerCount: optics.stats.activeLineLayerCount,
+      voigtEvaluations: optics.stats.voigtEvaluations,
+      finestStepCm: optics.stats.stepCm,
+      droppedLineLayerCount: 0,
+    }
+  } else {
+    const stepCm = chooseUniformStepCm({
+      lines: prepared.lines,
+      layers,
+      startCm: chunk.startCm,
+      endCm: chunk.endCm,
+      options: opticsOptions,
+    })
+    const optics = computeReferenceOpticalDepth({
+      lines: prepared.lines,
+      layers,
+      startCm: chunk.startCm,
+      endCm: chunk.endCm,
+      stepCm,
+      options: { wingCutoffCm: settings.wingCutoffCm },
+    })
+    grid = optics.wavenumberCm
+    opticalDepth = optics.opticalDepth
+    work = {
+      spectralMethod: method,
+      lineLayerCount: 0,
+      voigtEvaluations: optics.voigtEvaluations,
+      finestStepCm: stepCm,
+      droppedLineLayerCount: 0,
+    }
+  }
   const nGrid = grid.length
   const weights = new Float64Array(nGrid)
   trapezoidWeightsCm(grid, weights)
 
   const solution = solveSchwarzschild({
     wavenumberCm: grid,
-    layerOpticalDepth: optics.opticalDepth,
+    layerOpticalDepth: opticalDepth,
     levelTemperatureK,
     surfaceTemperatureK: profile.surfaceTemperatureK,
     surfaceEmissivity: profile.surfaceEmissivity,
@@ -83,14 +322,18 @@ export function computeChunk(prepared: PreparedComputation, chunk: ChunkBounds):
     const onEdge = Math.abs(position - nearest) < 1e-9
     // An interior edge point is shared by two bins; a chunk's end point belongs to its one bin.
     const shared = onEdge && nearest > 0 && nearest < binCount
-    const firstBin = shared ? nearest - 1 : onEdge ? Math.min(nearest, binCount - 1) : Math.floor(position)
+    const firstBin = shared
+      ? nearest - 1
+      : onEdge
+        ? Math.min(nearest, binCount - 1)
+        : Math.floor(position)
     const partCount = shared ? 2 : 1
     const share = shared ? 0.5 : 1
     // Vertical transmittance from each level to space.
     let tau = 0
     transmittance[nLevels - 1] = 1
     for (let layer = nLayers - 1; layer >= 0; layer--) {
-      tau += optics.opticalDepth[layer][i]
+      tau += opticalDepth[layer][i]
       transmittance[layer] = Math.exp(-tau)
     }
     for (let part = 0; part < partCount; part++) {
@@ -108,17 +351,15 @@ export function computeChunk(prepared: PreparedComputation, chunk: ChunkBounds):
       }
     }
   }
-  for (let bin = 0; bin < binCount; bin++) {
-    const inv = binWeight[bin] > 0 ? 1 / binWeight[bin] : 0
-    toaNadirRadianceBinned[bin] *= inv
-    surfaceZenithRadianceBinned[bin] *= inv
-    const base = bin * nLevels
-    for (let l = 0; l < nLevels; l++) {
-      fluxUpBinned[base + l] *= inv
-      fluxDownBinned[base + l] *= inv
-      transmittanceToSpaceBinned[base + l] *= inv
-    }
-  }
+  normaliseBins(
+    binWeight,
+    nLevels,
+    fluxUpBinned,
+    fluxDownBinned,
+    transmittanceToSpaceBinned,
+    toaNadirRadianceBinned,
+    surfaceZenithRadianceBinned,
+  )
 
   return {
     chunkIndex: chunk.index,
@@ -134,5 +375,6 @@ export function computeChunk(prepared: PreparedComputation, chunk: ChunkBounds):
     toaNadirRadianceBinned,
     surfaceZenithRadianceBinned,
     transmittanceToSpaceBinned,
+    work,
   }
 }

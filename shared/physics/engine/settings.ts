@@ -16,7 +16,7 @@ export interface ComputeSettings {
   outputResolutionCm: number
   /** Lines contribute up to this distance from their centre, cm⁻¹. */
   wingCutoffCm: number
-  /** Fine-grid points per narrowest Voigt half width. */
+  /** Grid points per narrowest Voigt half width of the 'uniform' and 'reference' methods. */
   pointsPerHalfWidth: number
   /** Angular quadrature for fluxes. */
   quadrature: AngleQuadratureSpec
@@ -26,6 +26,47 @@ export interface ComputeSettings {
   waterVapourContinuum: boolean
   /** Sub-Lorentzian far wings of CO₂ lines on/off. */
   co2SubLorentzianWings: boolean
+  /**
+   * How each chunk is sampled in wavenumber (default 'adaptive'): 'adaptive' refines a coarse grid
+   * only near lines that are optically significant in some layer; 'uniform' uses one fine grid tied
+   * to the narrowest line of any layer (steps of pointsPerHalfWidth); 'reference' is 'uniform' with
+   * brute-force optics (every line summed at every point) — slow, for checks on narrow windows.
+   */
+  spectralMethod?: SpectralMethod
+  /** Tuning of the 'adaptive' method (defaults are the tested ones). */
+  adaptive?: AdaptiveGridSettings
+}
+
+/** Spectral sampling of a chunk; see `ComputeSettings.spectralMethod`. */
+export type SpectralMethod = 'adaptive' | 'uniform' | 'reference'
+
+/**
+ * Tuning of the adaptive spectral grid (see optics/adaptive-optical-depth.ts for the method and
+ * its error budget). Unset fields take the defaults of the optics, which keep fluxes within
+ * ≈ 2e-3 W m⁻² and heating rates within ≈ 3e-4 K/day of the fine-grid paths over 10–3000 cm⁻¹.
+ */
+export interface AdaptiveGridSettings {
+  /** Peak optical depth of a line in a layer from which the grid resolves it (default 1e-3). */
+  significantPeakOpticalDepth?: number
+  /** Grid points per Voigt HWHM at the centre of a significant line (default 1.5). */
+  pointsPerHalfWidth?: number
+  /** Half widths over which the fine step is kept before it grows with distance (default 4). */
+  gradingHalfWidths?: number
+  /** Largest grid step, cm⁻¹ (default 1/16; the step is the bin width / 2^k). */
+  maxCoarseStepCm?: number
+  /** Budget of dropped negligible lines for fluxes, W m⁻² per cm⁻¹ (default 3e-6; 0 = keep all). */
+  negligibleFluxWPerM2PerCm?: number
+  /** Budget of dropped negligible lines for heating rates, K/day per cm⁻¹ per layer (default 5e-7). */
+  negligibleHeatingKPerDayPerCm?: number
+}
+
+const ADAPTIVE_LIMITS: Record<keyof AdaptiveGridSettings, [number, number]> = {
+  significantPeakOpticalDepth: [0, 1],
+  pointsPerHalfWidth: [1, 20],
+  gradingHalfWidths: [1, 100],
+  maxCoarseStepCm: [1e-4, 1],
+  negligibleFluxWPerM2PerCm: [0, 1e-3],
+  negligibleHeatingKPerDayPerCm: [0, 1e-3],
 }
 
 export const DEFAULT_COMPUTE_SETTINGS: ComputeSettings = {
@@ -39,6 +80,7 @@ export const DEFAULT_COMPUTE_SETTINGS: ComputeSettings = {
   layerSource: 'linear-in-tau',
   waterVapourContinuum: true,
   co2SubLorentzianWings: true,
+  spectralMethod: 'adaptive',
 }
 
 /** Fills defaults and checks consistency; throws PhysicsError naming the bad setting. */
@@ -63,9 +105,29 @@ export function resolveComputeSettings(partial: Partial<ComputeSettings> = {}): 
   if (Math.abs(bins - Math.round(bins)) > 1e-6) {
     bad('endCm', 'the range must be a whole number of output bins')
   }
-  if (!(s.wingCutoffCm > 0 && s.wingCutoffCm <= 500)) bad('wingCutoffCm', 'must be in (0, 500] cm⁻¹')
+  if (!(s.wingCutoffCm > 0 && s.wingCutoffCm <= 500))
+    bad('wingCutoffCm', 'must be in (0, 500] cm⁻¹')
   if (!(s.pointsPerHalfWidth >= 1 && s.pointsPerHalfWidth <= 20)) {
     bad('pointsPerHalfWidth', 'must be between 1 and 20')
+  }
+  const method = s.spectralMethod ?? 'adaptive'
+  if (method !== 'adaptive' && method !== 'uniform' && method !== 'reference') {
+    bad('spectralMethod', "must be 'adaptive', 'uniform' or 'reference'")
+  }
+  s.spectralMethod = method
+  if (s.adaptive !== undefined) {
+    if (typeof s.adaptive !== 'object' || s.adaptive === null) bad('adaptive', 'must be an object')
+    const adaptive = { ...s.adaptive }
+    for (const key of Object.keys(adaptive) as (keyof AdaptiveGridSettings)[]) {
+      const limits = ADAPTIVE_LIMITS[key]
+      if (!limits) bad('adaptive', `unknown setting '${String(key)}'`)
+      const value = adaptive[key]
+      if (value === undefined) continue
+      if (!(typeof value === 'number' && value >= limits[0] && value <= limits[1])) {
+        bad(`adaptive.${key}`, `must be a number in [${limits[0]}, ${limits[1]}]`)
+      }
+    }
+    s.adaptive = adaptive
   }
   return s
 }

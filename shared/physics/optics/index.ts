@@ -1,6 +1,7 @@
 /**
- * Optics of the physics engine: per-layer line state, layer optical depth on adaptive spectral
- * grids (fast multi-level path and brute-force reference), continuum hooks, Beer–Lambert
+ * Optics of the physics engine: per-layer line state, layer optical depth on spectral grids
+ * (adaptive grid with masked multi-level summation — the engine's default —, uniform multi-level
+ * path, and brute-force reference), continuum hooks, Beer–Lambert
  * transmittance and column optical depths, and the split of a spectrum into chunks.
  */
 export {
@@ -30,12 +31,29 @@ export type {
 } from './optics-options'
 export { gridIndexRange, gridWavenumbersCm, planChunks } from './spectral-grid'
 export type { GridIndexRange, SpectralChunk } from './spectral-grid'
-export { computeChunkOpticalDepth } from './optical-depth'
+export { chooseUniformStepCm, computeChunkOpticalDepth } from './optical-depth'
 export type {
   ChunkOpticalDepthInput,
   ChunkOpticalDepthResult,
   ChunkOpticalDepthStats,
 } from './optical-depth'
+export {
+  computeAdaptiveChunkOpticalDepth,
+  peakOpticalDepth,
+  DEFAULT_SIGNIFICANT_PEAK_OPTICAL_DEPTH,
+} from './adaptive-optical-depth'
+export type {
+  AdaptiveChunkOpticalDepthInput,
+  AdaptiveChunkOpticalDepthResult,
+  AdaptiveOpticalDepthStats,
+  AdaptiveOpticsOptions,
+} from './adaptive-optical-depth'
+export { planAdaptiveGrid, requiredStepCm } from './adaptive-grid'
+export type {
+  AdaptiveGridParameters,
+  AdaptiveSpectralGrid,
+  GridRequirements,
+} from './adaptive-grid'
 export { computeReferenceOpticalDepth } from './reference-optical-depth'
 export type {
   ReferenceOpticalDepthInput,

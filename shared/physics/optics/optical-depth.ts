@@ -532,6 +532,28 @@ function depositLayer(ws: Workspace, state: LayerLineState, options: ResolvedOpt
 }
 
 /**
+ * The uniform grid step `computeChunkOpticalDepth` chooses for a chunk (without computing optical
+ * depths), e.g. to run the brute-force reference on the same grid.
+ *
+ * Method: the largest power of two (cm⁻¹) not above α_min/P within [minStepCm, maxStepCm], α_min
+ * the narrowest Voigt HWHM of active lines centred in or within 5 HWHM (+ 1 cm⁻¹) of the chunk over
+ * all layers; the fixed `stepCm` when given. Notes: see the module comment. Units: cm⁻¹.
+ * Source: common practice (points per narrowest half width).
+ * @param input lines, layers, chunk bounds and options as for `computeChunkOpticalDepth`
+ * @returns the step h₀, cm⁻¹
+ */
+export function chooseUniformStepCm(input: ChunkOpticalDepthInput): number {
+  const { lines, layers, startCm, endCm } = input
+  const options = resolveOpticsOptions(input.options ?? {})
+  assertFiniteInRange('startCm', startCm, Number.MIN_VALUE, Infinity)
+  assertFiniteInRange('endCm', endCm, startCm, Infinity)
+  layers.forEach((layer, index) => validateLayerForOptics(layer, index))
+  const narrowest =
+    options.stepCm === null ? narrowestHalfWidthCm(lines, layers, startCm, endCm, options) : null
+  return chooseStepCm(narrowest, options)
+}
+
+/**
  * Vertical optical depth of every layer on the adaptive grid of one spectral chunk (fast path).
  *
  * Method: τ_k(ν) = Σ_i A_ik f_i(ν − ν*_i) + continuum, with A_ik = S_i(T_k)·u_k the integrated
