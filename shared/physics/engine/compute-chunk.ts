@@ -90,6 +90,8 @@ function computeAdaptiveChunk(prepared: PreparedComputation, chunk: ChunkBounds)
     endCm: chunk.endCm,
     options: {
       wingCutoffCm: settings.wingCutoffCm,
+      continuum: prepared.continuum,
+      partitionFunctionLookup: prepared.partitionFunctionLookup,
       unitCm: settings.outputResolutionCm,
       referenceTemperatureK: warmestTemperatureK(prepared),
       significantPeakOpticalDepth: adaptive.significantPeakOpticalDepth,
@@ -242,6 +244,8 @@ function computeUniformChunk(
   const opticsOptions = {
     wingCutoffCm: settings.wingCutoffCm,
     pointsPerHalfWidth: settings.pointsPerHalfWidth,
+    continuum: prepared.continuum,
+    partitionFunctionLookup: prepared.partitionFunctionLookup,
   }
   let grid: Float64Array
   let opticalDepth: Float64Array[]
@@ -277,7 +281,7 @@ function computeUniformChunk(
       startCm: chunk.startCm,
       endCm: chunk.endCm,
       stepCm,
-      options: { wingCutoffCm: settings.wingCutoffCm },
+      options: { wingCutoffCm: settings.wingCutoffCm, continuum: prepared.continuum, partitionFunctionLookup: prepared.partitionFunctionLookup },
     })
     grid = optics.wavenumberCm
     opticalDepth = optics.opticalDepth

@@ -4,7 +4,11 @@
  */
 import { levelsToLayers, type AtmosphereLayerDetailed } from '../atmosphere/layers'
 import { findTropopause, type TropopauseResult } from '../atmosphere/tropopause'
+import { createBuiltInPartitionFunctionLookup } from '../../catalogue/partition-functions'
+import { buildContinuumHooks } from '../continuum/continuum-hooks'
 import { PhysicsError } from '../errors'
+import type { ContinuumHook } from '../optics/continuum'
+import type { PartitionFunctionLookup } from '../spectroscopy/partition-function'
 import type { LineTable } from '../spectroscopy/line'
 import { angleQuadrature, type AngleQuadrature } from '../transfer/quadrature'
 import type { AtmosphereProfile } from '../types'
@@ -31,6 +35,10 @@ export interface PreparedComputation {
   tropopause: TropopauseResult
   chunks: ChunkBounds[]
   binCount: number
+  /** Continuum terms added to every layer's optical depth (from the settings). */
+  continuum: ContinuumHook[]
+  /** Partition functions Q(T) per isotopologue: level sums of the built-in catalogue, else approximations. */
+  partitionFunctionLookup: PartitionFunctionLookup
 }
 
 /** Splits [start, end] into chunks aligned to the output bins; the last chunk may be shorter. */
@@ -84,5 +92,7 @@ export function prepareComputation(
     tropopause: findTropopause(profile),
     chunks,
     binCount: chunks.reduce((s, c) => s + c.binCount, 0),
+    continuum: buildContinuumHooks({ waterVapour: settings.waterVapourContinuum }),
+    partitionFunctionLookup: createBuiltInPartitionFunctionLookup(),
   }
 }

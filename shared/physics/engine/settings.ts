@@ -22,9 +22,10 @@ export interface ComputeSettings {
   quadrature: AngleQuadratureSpec
   /** Source function inside a layer. */
   layerSource: LayerSourceMode
-  /** Water-vapour continuum on/off (applied when a continuum model is available). */
+  /** Water-vapour continuum on/off (Roberts et al. 1976 form, 650–1300 cm⁻¹; see physics/continuum). */
   waterVapourContinuum: boolean
-  /** Sub-Lorentzian far wings of CO₂ lines on/off. */
+  /** Sub-Lorentzian far wings of CO₂ lines (χ factor). Accepted but NOT applied yet: the optics
+   * do not shape line wings; a run records the request so its hash stays honest. */
   co2SubLorentzianWings: boolean
   /**
    * How each chunk is sampled in wavenumber (default 'adaptive'): 'adaptive' refines a coarse grid
@@ -79,7 +80,7 @@ export const DEFAULT_COMPUTE_SETTINGS: ComputeSettings = {
   quadrature: { kind: 'gauss-legendre', nodes: 3 },
   layerSource: 'linear-in-tau',
   waterVapourContinuum: true,
-  co2SubLorentzianWings: true,
+  co2SubLorentzianWings: false,
   spectralMethod: 'adaptive',
 }
 

@@ -15,13 +15,21 @@ const settings = { startCm: 660, endCm: 700, chunkWidthCm: 20, outputResolutionC
 
 describe('computeRadiation', () => {
   it('when there are no lines, OLR is the surface Planck band integral and the sky is dark (Kirchhoff, ε = 1)', () => {
-    const result = computeRadiation(profile, toLineTable([]), settings)
+    const result = computeRadiation(profile, toLineTable([]), { ...settings, waterVapourContinuum: false })
     const expected = Math.PI * planckBandIntegral(660, 700, profile.surfaceTemperatureK) // W m⁻², Planck (Widger & Woodall 1976)
     expect(result.olrWPerM2 / expected - 1).toBeLessThan(1e-6)
     expect(result.surfaceDownWPerM2).toBe(0)
     expect(Array.from(result.heatingRateKPerDay).every((h) => Math.abs(h) < 1e-9)).toBe(true)
     expect(result.columnTransmittance.every((t) => t === 1)).toBe(true)
     expect(Number.isNaN(result.emissionPressurePa[0])).toBe(true)
+  })
+
+  it('when the water-vapour continuum is on, an empty line list still absorbs in its range (Roberts et al. 1976 form)', () => {
+    const window = { startCm: 900, endCm: 940, chunkWidthCm: 20, outputResolutionCm: 1 }
+    const off = computeRadiation(profile, toLineTable([]), { ...window, waterVapourContinuum: false })
+    const on = computeRadiation(profile, toLineTable([]), { ...window, waterVapourContinuum: true })
+    expect(on.olrWPerM2).toBeLessThan(off.olrWPerM2)
+    expect(on.surfaceDownWPerM2).toBeGreaterThan(0)
   })
 
   it('when the band absorbs, OLR drops, the sky emits downward, and the band centre is seen from higher up than its flanks', () => {
