@@ -4,11 +4,13 @@ import { catalogueCommand, catalogueHelp } from './catalogue-command'
 import { computeCommand, computeHelp } from './compute-command'
 import { forcingCommand, forcingHelp } from './forcing-command'
 import { planckCommand, planckHelp } from './planck-command'
+import { runCommand, runHelp } from './run-command'
 
 const commands: Record<string, { run: (argv: string[]) => void | Promise<void>; help: string }> = {
   planck: { run: planckCommand, help: planckHelp },
   compute: { run: computeCommand, help: computeHelp },
   forcing: { run: forcingCommand, help: forcingHelp },
+  run: { run: runCommand, help: runHelp },
   catalogue: { run: catalogueCommand, help: catalogueHelp },
 }
 
