@@ -15,6 +15,7 @@ import { fileURLToPath } from 'node:url'
 import { ENGINE_VERSION } from '../shared/version'
 import { caseA, caseB, caseC, caseD, type BenchRow, type CaseOptions } from './bench/cases'
 import { loadBuiltInCatalogue } from './bench/inputs'
+import { caseE } from './bench/parallel-case'
 
 const ROOT = join(dirname(fileURLToPath(import.meta.url)), '..')
 
@@ -22,9 +23,9 @@ function parseArguments(argv: string[]): { quick: boolean; cases: string[] } {
   const quick = argv.includes('--quick')
   const index = argv.indexOf('--cases')
   const cases =
-    index >= 0 && argv[index + 1] ? argv[index + 1].toUpperCase().split(',') : ['A', 'B', 'C', 'D']
+    index >= 0 && argv[index + 1] ? argv[index + 1].toUpperCase().split(',') : ['A', 'B', 'C', 'D', 'E']
   for (const name of cases) {
-    if (!['A', 'B', 'C', 'D'].includes(name)) throw new Error(`unknown case '${name}' (A, B, C, D)`)
+    if (!['A', 'B', 'C', 'D', 'E'].includes(name)) throw new Error(`unknown case '${name}' (A, B, C, D, E)`)
   }
   return { quick, cases }
 }
@@ -69,7 +70,7 @@ function table(rows: BenchRow[]): string {
   return [line(header), line(widths.map((w) => '-'.repeat(w))), ...body.map(line)].join('\n')
 }
 
-function main(): void {
+async function main(): Promise<void> {
   const { quick, cases } = parseArguments(process.argv.slice(2))
   const log = (line: string) => process.stderr.write(line + '\n')
   const catalogue = loadBuiltInCatalogue()
@@ -77,16 +78,17 @@ function main(): void {
     `Tauline bench (${quick ? 'quick' : 'full'}), engine ${ENGINE_VERSION}, ${catalogue.table.length} lines, cases ${cases.join(',')}`,
   )
   const options: CaseOptions = { quick, catalogue, log }
-  const runners: Record<string, (o: CaseOptions) => BenchRow[]> = {
+  const runners: Record<string, (o: CaseOptions) => BenchRow[] | Promise<BenchRow[]>> = {
     A: caseA,
     B: caseB,
     C: caseC,
     D: caseD,
+    E: caseE,
   }
   const rows: BenchRow[] = []
   for (const name of cases) {
     log(`case ${name}`)
-    rows.push(...runners[name](options))
+    rows.push(...(await runners[name](options)))
   }
   process.stdout.write(table(rows) + '\n')
 
@@ -110,4 +112,4 @@ function main(): void {
   log(`wrote ${file}`)
 }
 
-main()
+await main()
