@@ -24,7 +24,7 @@ export const runSettingsSchema = z
       .default({ kind: 'gauss-legendre', nodes: 3 }),
     layerSource: z.enum(['linear-in-tau', 'isothermal']).default('linear-in-tau'),
     waterVapourContinuum: z.boolean().default(true),
-    co2SubLorentzianWings: z.literal(false, { message: 'Sub-Lorentzian CO₂ wings are not available yet.' }).default(false),
+    co2SubLorentzianWings: z.boolean().default(true),
   })
   .refine((s) => s.startCm < s.endCm, { message: 'The range must start below its end.', path: ['endCm'] })
   .refine((s) => (s.endCm - s.startCm) / s.outputResolutionCm <= 200_000, {

@@ -92,6 +92,7 @@ function computeAdaptiveChunk(prepared: PreparedComputation, chunk: ChunkBounds)
       wingCutoffCm: settings.wingCutoffCm,
       continuum: prepared.continuum,
       partitionFunctionLookup: prepared.partitionFunctionLookup,
+      lineWingWeights: prepared.lineWingWeights,
       unitCm: settings.outputResolutionCm,
       referenceTemperatureK: warmestTemperatureK(prepared),
       significantPeakOpticalDepth: adaptive.significantPeakOpticalDepth,
@@ -246,6 +247,7 @@ function computeUniformChunk(
     pointsPerHalfWidth: settings.pointsPerHalfWidth,
     continuum: prepared.continuum,
     partitionFunctionLookup: prepared.partitionFunctionLookup,
+    lineWingWeights: prepared.lineWingWeights,
   }
   let grid: Float64Array
   let opticalDepth: Float64Array[]
@@ -281,7 +283,7 @@ function computeUniformChunk(
       startCm: chunk.startCm,
       endCm: chunk.endCm,
       stepCm,
-      options: { wingCutoffCm: settings.wingCutoffCm, continuum: prepared.continuum, partitionFunctionLookup: prepared.partitionFunctionLookup },
+      options: { wingCutoffCm: settings.wingCutoffCm, continuum: prepared.continuum, partitionFunctionLookup: prepared.partitionFunctionLookup, lineWingWeights: prepared.lineWingWeights },
     })
     grid = optics.wavenumberCm
     opticalDepth = optics.opticalDepth

@@ -6,8 +6,10 @@ import { levelsToLayers, type AtmosphereLayerDetailed } from '../atmosphere/laye
 import { findTropopause, type TropopauseResult } from '../atmosphere/tropopause'
 import { createBuiltInPartitionFunctionLookup } from '../../catalogue/partition-functions'
 import { buildContinuumHooks } from '../continuum/continuum-hooks'
+import { CO2_CHI_WING_WEIGHT } from '../continuum/co2-chi-factor'
 import { PhysicsError } from '../errors'
 import type { ContinuumHook } from '../optics/continuum'
+import type { LineWingWeights } from '../optics/line-wing-weights'
 import type { PartitionFunctionLookup } from '../spectroscopy/partition-function'
 import type { LineTable } from '../spectroscopy/line'
 import { angleQuadrature, type AngleQuadrature } from '../transfer/quadrature'
@@ -39,6 +41,8 @@ export interface PreparedComputation {
   continuum: ContinuumHook[]
   /** Partition functions Q(T) per isotopologue: level sums of the built-in catalogue, else approximations. */
   partitionFunctionLookup: PartitionFunctionLookup
+  /** Far-wing weights by molecule number (CO₂ χ-factor when `co2SubLorentzianWings`). */
+  lineWingWeights: LineWingWeights
 }
 
 /** Splits [start, end] into chunks aligned to the output bins; the last chunk may be shorter. */
@@ -94,5 +98,6 @@ export function prepareComputation(
     binCount: chunks.reduce((s, c) => s + c.binCount, 0),
     continuum: buildContinuumHooks({ waterVapour: settings.waterVapourContinuum }),
     partitionFunctionLookup: createBuiltInPartitionFunctionLookup(),
+    lineWingWeights: settings.co2SubLorentzianWings ? { 2: CO2_CHI_WING_WEIGHT } : {},
   }
 }

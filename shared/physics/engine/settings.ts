@@ -24,8 +24,8 @@ export interface ComputeSettings {
   layerSource: LayerSourceMode
   /** Water-vapour continuum on/off (Roberts et al. 1976 form, 650–1300 cm⁻¹; see physics/continuum). */
   waterVapourContinuum: boolean
-  /** Sub-Lorentzian far wings of CO₂ lines (χ factor). Accepted but NOT applied yet: the optics
-   * do not shape line wings; a run records the request so its hash stays honest. */
+  /** Sub-Lorentzian far wings of CO₂ lines (χ factor, Perrin & Hartmann 1989; default on): each
+   * CO₂ line's profile is multiplied by χ beyond 3 cm⁻¹ up to the common wing cutoff. */
   co2SubLorentzianWings: boolean
   /**
    * How each chunk is sampled in wavenumber (default 'adaptive'): 'adaptive' refines a coarse grid
@@ -80,7 +80,7 @@ export const DEFAULT_COMPUTE_SETTINGS: ComputeSettings = {
   quadrature: { kind: 'gauss-legendre', nodes: 3 },
   layerSource: 'linear-in-tau',
   waterVapourContinuum: true,
-  co2SubLorentzianWings: false,
+  co2SubLorentzianWings: true,
   spectralMethod: 'adaptive',
 }
 

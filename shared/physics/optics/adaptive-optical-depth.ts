@@ -59,6 +59,13 @@ import type { AtmosphereLayer } from '../types'
 import { planAdaptiveGrid, type AdaptiveSpectralGrid } from './adaptive-grid'
 import { applyContinuumHooks, validateContinuumHooks, type ContinuumHook } from './continuum'
 import {
+  layerWingWeights,
+  validateLineWingWeights,
+  wingWeightOf,
+  type LayerWingWeight,
+  type LineWingWeights,
+} from './line-wing-weights'
+import {
   MAX_PRESSURE_SHIFT_CM,
   computeLayerLineState,
   createLayerLineState,
@@ -120,6 +127,12 @@ export interface AdaptiveOpticsOptions {
   wingCutoffCm?: number
   /** Subtract the profile value at the cutoff inside it (default false). */
   subtractPedestal?: boolean
+  /**
+   * Far-wing weights χ(|ν − ν*|, T_layer) by molecule number (e.g. { 2: CO2_CHI_WING_WEIGHT }),
+   * applied beyond each weight's onset up to the common cutoff, as in `OpticsOptions` (default
+   * none).
+   */
+  lineWingWeights?: LineWingWeights
   /**
    * Unit the coarse step divides: the coarse step is unitCm/2^k, the largest such step not above
    * maxCoarseStepCm, so every multiple of unitCm from the chunk start is a grid point (default:
@@ -209,6 +222,7 @@ export interface AdaptiveChunkOpticalDepthResult {
 interface ResolvedAdaptiveOptions {
   wingCutoffCm: number
   subtractPedestal: boolean
+  lineWingWeights: LineWingWeights
   unitCm: number
   maxCoarseStepCm: number
   minStepCm: number
@@ -264,6 +278,7 @@ function resolveOptions(
       1e4,
     ),
     subtractPedestal: options.subtractPedestal ?? false,
+    lineWingWeights: validateLineWingWeights(options.lineWingWeights),
     unitCm: number('unitCm', options.unitCm, chunkWidthCm, Number.MIN_VALUE, Infinity),
     maxCoarseStepCm: number(
       'maxCoarseStepCm',
@@ -458,6 +473,8 @@ function localStepCm(grid: Float64Array, nu: number): number {
 function depositLayer(
   ws: MaskedMultigrid,
   state: LayerLineState,
+  moleculeId: Int32Array,
+  weights: readonly (LayerWingWeight | undefined)[],
   flags: Uint8Array,
   stepNearLine: Float64Array,
   options: ResolvedAdaptiveOptions,
@@ -487,9 +504,11 @@ function depositLayer(
     const scale = SQRT_LN2 / alphaD
     const y = gamma * scale
     const amplitude = (strength * SQRT_LN2_OVER_PI) / alphaD
+    const weight = wingWeightOf(weights, moleculeId[i])
     let pedestal = 0
     if (options.subtractPedestal) {
       pedestal = voigtKUnchecked(cutoff * scale, y)
+      if (weight !== undefined && cutoff > weight.onsetCm) pedestal *= weight.chi(cutoff)
       ws.voigtEvaluations++
     }
     const coreLevel = maskedCoreLevel(
@@ -510,6 +529,7 @@ function depositLayer(
       coreLevel,
       rho,
       kind !== WEAK,
+      weight,
     )
   }
   return widened
@@ -522,7 +542,9 @@ function depositLayer(
  * (`computeLayerLineState`) and peak optical depth τ₀ (`peakOpticalDepth`); pairs with τ₀ ≥ ε set
  * the grid (`planAdaptiveGrid` with the line's narrowest significant Voigt HWHM and the spread of
  * its shifted centres); weak pairs on a grid coarser than α_V/P get α_D → √(α_D² + s²); then
- * τ_k(ν) = Σ_i A_ik f_ik(ν − ν*_ik) by the masked multi-level summation, plus continuum hooks.
+ * τ_k(ν) = Σ_i A_ik f_ik(ν − ν*_ik) by the masked multi-level summation, plus continuum hooks;
+ * f_ik is multiplied by the far-wing weight χ(ν − ν*_ik, T_k) of the line's molecule beyond the
+ * weight's onset when `lineWingWeights` has one (kinks of χ evaluated exactly for significant pairs).
  * Notes: see the module comment for the error budget (weak-pair widening ≲ 1.3ε of each weak
  * pair's absorption; multi-level summation as the uniform path). Deterministic: the same input
  * gives bit-identical output. Memory ≈ (chunk width / finest step) doubles of scratch per level
@@ -678,6 +700,8 @@ export function computeAdaptiveChunkOpticalDepth(
     widened += depositLayer(
       ws,
       states[k],
+      slice.moleculeId,
+      layerWingWeights(options.lineWingWeights, layers[k].meanTemperatureK),
       kinds[k],
       stepNearLine,
       options,

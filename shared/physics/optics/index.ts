@@ -68,3 +68,5 @@ export {
   layerTransmittance,
   opticalDepthFromTop,
 } from './transmittance'
+export { layerWingWeights, validateLineWingWeights, wingWeightOf } from './line-wing-weights'
+export type { LayerWingWeight, LineWingWeights } from './line-wing-weights'

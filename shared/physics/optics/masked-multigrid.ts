@@ -19,11 +19,15 @@
  */
 import { PhysicsError } from '../errors'
 import { voigtKUnchecked } from '../spectroscopy'
+import type { LayerWingWeight } from './line-wing-weights'
 
 /** Most grid levels used. */
 const MAX_LEVELS = 40
-/** Zone intervals stored per level and line (core, two edges, and stencils of the level below). */
-const MAX_ZONES = 8
+/**
+ * Zone intervals stored per level and line (core, two edges, two per wing-weight kink, and
+ * stencils of the level below).
+ */
+const MAX_ZONES = 16
 
 /** Levels, masks, accumulators and per-line scratch of one chunk. */
 export interface MaskedMultigrid {
@@ -355,7 +359,11 @@ function firstMaskInterval(hiList: Float64Array, node: number): number {
  * `withEdgeZones`, the nodes within 2h_ℓ₊₁ + h_ℓ of ν* ± cutoff on every level, where the
  * truncated profile jumps. Without edge zones the jump of size f(cutoff) is interpolated from the
  * top level: an error of order f(cutoff)·h_top in the line's area, ≲ 1e-4 of the area of a line
- * with γ ≤ 0.1 cm⁻¹ and a 25 cm⁻¹ cutoff (used for weak lines only).
+ * with γ ≤ 0.1 cm⁻¹ and a 25 cm⁻¹ cutoff (used for weak lines only). With a far-wing `weight`,
+ * f is multiplied by χ(ν − ν*) beyond its onset on every level (the caller folds χ(cutoff) into
+ * `pedestal`), and with `withEdgeZones` each kink κ < cutoff of χ gets zones like the edges, so no
+ * interpolation stencil straddles a slope discontinuity of χ; without them (weak lines) the kink
+ * is interpolated, an error ≲ 0.1·h_ℓ₊₁·ΔB of the wing there (ΔB the slope jump of ln χ).
  */
 export function depositMaskedLine(
   ws: MaskedMultigrid,
@@ -368,8 +376,10 @@ export function depositMaskedLine(
   coreLevel: number,
   nearZoneCoarseSteps: number,
   withEdgeZones: boolean,
+  weight?: LayerWingWeight,
 ): void {
   const top = ws.levelCount - 1
+  const onset = weight === undefined ? Infinity : weight.onsetCm
   const ratio = ws.ratio
   const anchorOffset = ws.anchorCm - centreCm
   const relative = centreCm - ws.anchorCm
@@ -420,6 +430,27 @@ export function depositMaskedLine(
           first,
           last,
         )
+        if (weight !== undefined) {
+          for (const kink of weight.kinksCm) {
+            if (!(kink < cutoffCm)) break
+            count = pushInterval(
+              ws,
+              count,
+              Math.ceil((relative - kink - edge) / step),
+              Math.floor((relative - kink + edge) / step),
+              first,
+              last,
+            )
+            count = pushInterval(
+              ws,
+              count,
+              Math.ceil((relative + kink - edge) / step),
+              Math.floor((relative + kink + edge) / step),
+              first,
+              last,
+            )
+          }
+        }
       }
     }
     if (level > startLevel) {
@@ -471,7 +502,9 @@ export function depositMaskedLine(
             const offset = n * multiplier * baseStep + anchorOffset
             let value = 0
             if (offset <= cutoffCm && offset >= -cutoffCm) {
-              value = amplitude * (voigtKFast(offset * scale, y) - pedestal)
+              let k = voigtKFast(offset * scale, y)
+              if (offset > onset || offset < -onset) k *= (weight as LayerWingWeight).chi(offset)
+              value = amplitude * (k - pedestal)
               evaluations++
             }
             values[n - first] = value
@@ -501,15 +534,17 @@ export function depositMaskedLine(
             if (offset <= cutoffCm && offset >= -cutoffCm) {
               const x = offset * scale
               const ax = x < 0 ? -x : x
+              let k: number
               if (ax + y >= REGION_I_MIN && ax + y < REGION_I_MAX) {
                 // Region I of `voigtKFast`, written out so that the hot loop needs no call.
                 const x2 = x * x
                 const d = 0.5 + y2 - x2
-                value =
-                  amplitude * ((0.5641896 * y * (0.5 + x2 + y2)) / (d * d + 4 * x2 * y2) - pedestal)
+                k = (0.5641896 * y * (0.5 + x2 + y2)) / (d * d + 4 * x2 * y2)
               } else {
-                value = amplitude * (voigtKFast(x, y) - pedestal)
+                k = voigtKFast(x, y)
               }
+              if (offset > onset || offset < -onset) k *= (weight as LayerWingWeight).chi(offset)
+              value = amplitude * (k - pedestal)
               evaluations++
             }
             values[n - first] = value

@@ -24,6 +24,8 @@
  *   two between α_min/8 and α_min/4);
  * - two edge zones ||ν − ν*| − cutoff| ≤ E_ℓ = 2h_ℓ₊₁ + h_ℓ around the wing cutoff, where the
  *   truncated profile jumps (or, with the pedestal, has a kink);
+ * - for lines with a far-wing weight χ (`lineWingWeights`), two kink zones ||ν − ν*| − κ| ≤ E_ℓ
+ *   around every slope discontinuity κ < cutoff of χ (its onset and break points), like the edges;
  * - on the top level L, every node within the cutoff;
  * - the stencil of every node of Z_ℓ₋₁ (so the zones nest: Z_ℓ ⊇ dilation of Z_ℓ₋₁).
  * On Z_ℓ the line adds A_ℓ = f − P_ℓ₊₁[f on G_ℓ₊₁] (on the top level simply f), where f is the
@@ -78,6 +80,7 @@ import {
   validateLayerForOptics,
   type LayerLineState,
 } from './layer-line-state'
+import { layerWingWeights, wingWeightOf, type LayerWingWeight } from './line-wing-weights'
 import {
   resolveOpticsOptions,
   type OpticsOptions,
@@ -89,8 +92,8 @@ const SQRT_LN2 = Math.sqrt(Math.LN2)
 const SQRT_LN2_OVER_PI = Math.sqrt(Math.LN2 / Math.PI)
 /** Most grid levels used (the top level is reached long before for any physical cutoff). */
 const MAX_LEVELS = 16
-/** Zone intervals stored per level and line (3 needed: core and two edges). */
-const MAX_ZONES = 8
+/** Zone intervals stored per level and line (core, two edges, two per wing-weight kink). */
+const MAX_ZONES = 16
 /** Lines centred this far (in their own Voigt HWHM) outside the chunk still set the step. */
 const STEP_SEARCH_HALF_WIDTHS = 5
 /** Extra window searched for lines that set the step, cm⁻¹. */
@@ -362,9 +365,11 @@ function depositLine(
   pedestal: number,
   cutoffCm: number,
   coreLevel: number,
+  weight: LayerWingWeight | undefined,
 ): void {
   const top = ws.levelCount - 1
   const ratio = ws.ratio
+  const onset = weight === undefined ? Infinity : weight.onsetCm
   // Zones, from the finest level up (each contains the stencils of the one below).
   for (let level = 0; level <= top; level++) {
     const step = ws.stepCm[level]
@@ -409,6 +414,27 @@ function depositLine(
         first,
         last,
       )
+      if (weight !== undefined) {
+        for (const kink of weight.kinksCm) {
+          if (!(kink < cutoffCm)) break
+          count = pushInterval(
+            ws,
+            count,
+            Math.ceil((centreCm - kink - edge) / step),
+            Math.floor((centreCm - kink + edge) / step),
+            first,
+            last,
+          )
+          count = pushInterval(
+            ws,
+            count,
+            Math.ceil((centreCm + kink - edge) / step),
+            Math.floor((centreCm + kink + edge) / step),
+            first,
+            last,
+          )
+        }
+      }
     }
     if (level > 0) {
       const below = (level - 1) * MAX_ZONES
@@ -448,8 +474,11 @@ function depositLine(
       for (let n = lo; n <= hi; n++) {
         const offset = n * multiplier * baseStep - centreCm
         let value = 0
-        if (Math.abs(offset) <= cutoffCm) {
-          value = amplitude * (voigtKUnchecked(offset * scale, y) - pedestal)
+        const distance = Math.abs(offset)
+        if (distance <= cutoffCm) {
+          let k = voigtKUnchecked(offset * scale, y)
+          if (distance > onset) k *= (weight as LayerWingWeight).chi(offset)
+          value = amplitude * (k - pedestal)
           evaluations++
         }
         values[n - first] = value
@@ -512,11 +541,18 @@ function coreLevelOf(ws: Workspace, voigtHalfWidthCm: number, pointsPerHalfWidth
 }
 
 /** Adds every active line of one layer to the accumulators. */
-function depositLayer(ws: Workspace, state: LayerLineState, options: ResolvedOpticsOptions): void {
+function depositLayer(
+  ws: Workspace,
+  state: LayerLineState,
+  moleculeId: Int32Array,
+  weights: readonly (LayerWingWeight | undefined)[],
+  options: ResolvedOpticsOptions,
+): void {
   const cutoff = options.wingCutoffCm
   for (let i = 0; i < state.length; i++) {
     const strength = state.integratedOpticalDepthCm[i]
     if (!(strength > 0)) continue
+    const weight = wingWeightOf(weights, moleculeId[i])
     const alphaD = state.dopplerHalfWidthCm[i]
     const scale = SQRT_LN2 / alphaD
     const y = state.lorentzHalfWidthCm[i] * scale
@@ -524,10 +560,11 @@ function depositLayer(ws: Workspace, state: LayerLineState, options: ResolvedOpt
     let pedestal = 0
     if (options.subtractPedestal) {
       pedestal = voigtKUnchecked(cutoff * scale, y)
+      if (weight !== undefined && cutoff > weight.onsetCm) pedestal *= weight.chi(cutoff)
       ws.voigtEvaluations++
     }
     const coreLevel = coreLevelOf(ws, state.voigtHalfWidthCm[i], options.corePointsPerHalfWidth)
-    depositLine(ws, state.centreCm[i], amplitude, scale, y, pedestal, cutoff, coreLevel)
+    depositLine(ws, state.centreCm[i], amplitude, scale, y, pedestal, cutoff, coreLevel, weight)
   }
 }
 
@@ -559,7 +596,8 @@ export function chooseUniformStepCm(input: ChunkOpticalDepthInput): number {
  * Method: τ_k(ν) = Σ_i A_ik f_i(ν − ν*_i) + continuum, with A_ik = S_i(T_k)·u_k the integrated
  * optical depth of line i in layer k (`computeLayerLineState`) and f_i the area-normalised Voigt
  * profile K(x, y)·√(ln2/π)/α_D truncated at the wing cutoff (minus its value at the cutoff when
- * `subtractPedestal`). Evaluated with the multi-level fine/coarse scheme of the module comment:
+ * `subtractPedestal`), times the far-wing weight χ(ν − ν*_i, T_k) of the line's molecule beyond
+ * the weight's onset when `lineWingWeights` has one (pedestal K(cutoff)·χ(cutoff)). Evaluated with the multi-level fine/coarse scheme of the module comment:
  * exact on a near zone of each line and at the cutoff edges, smooth far wings accumulated on
  * coarser grids and added by cubic interpolation. The continuum hooks are added last.
  * Notes: lines whose shifted centre lies within the cutoff outside the chunk contribute their
@@ -629,7 +667,8 @@ export function computeChunkOpticalDepth(input: ChunkOpticalDepthInput): ChunkOp
       molarMassLookup: options.molarMassLookup,
     })
     activeLineLayerCount += state.activeCount
-    depositLayer(ws, state, options)
+    const weights = layerWingWeights(options.lineWingWeights, layers[k].meanTemperatureK)
+    depositLayer(ws, state, slice.moleculeId, weights, options)
     interpolateLevelsDown(ws)
     // Cancellation of coarse samples can leave rounding-level negatives (≈ −1e-22 next to a line's
     // cutoff edge where nothing else absorbs); optical depth is never negative.

@@ -4,6 +4,7 @@
 import { PhysicsError, assertFiniteInRange } from '../errors'
 import type { MolarMassLookup, PartitionFunctionLookup } from '../spectroscopy'
 import { validateContinuumHooks, type ContinuumHook } from './continuum'
+import { validateLineWingWeights, type LineWingWeights } from './line-wing-weights'
 
 /** Line shapes the optics can evaluate. */
 export type OpticsLineShape = 'voigt'
@@ -28,6 +29,13 @@ export interface OpticsOptions {
   wingCutoffCm?: number
   /** Subtract the profile value at the cutoff inside it (continuous at the edge; default false). */
   subtractPedestal?: boolean
+  /**
+   * Far-wing weights χ(|ν − ν*|, T_layer) by molecule number (e.g. { 2: CO2_CHI_WING_WEIGHT }):
+   * the profile of each line of that molecule is multiplied by χ beyond the weight's onset, up to
+   * the (common) wing cutoff; with pedestal subtraction the subtracted value is K(cutoff)·χ(cutoff)
+   * (default none).
+   */
+  lineWingWeights?: LineWingWeights
   /** Grid step ≤ narrowest Voigt HWHM of the chunk / this (default 4). */
   pointsPerHalfWidth?: number
   /** Lower bound of the adaptive step, cm⁻¹ (default 1e-5). */
@@ -53,6 +61,7 @@ export type ReferenceOpticsOptions = Pick<
   OpticsOptions,
   | 'wingCutoffCm'
   | 'subtractPedestal'
+  | 'lineWingWeights'
   | 'continuum'
   | 'lineShape'
   | 'partitionFunctionLookup'
@@ -78,6 +87,7 @@ export const DEFAULT_CORE_POINTS_PER_HALF_WIDTH = 8
 export interface ResolvedOpticsOptions {
   wingCutoffCm: number
   subtractPedestal: boolean
+  lineWingWeights: LineWingWeights
   pointsPerHalfWidth: number
   minStepCm: number
   maxStepCm: number
@@ -129,6 +139,7 @@ export function resolveOpticsOptions(options: OpticsOptions = {}): ResolvedOptic
   return {
     wingCutoffCm,
     subtractPedestal: options.subtractPedestal ?? false,
+    lineWingWeights: validateLineWingWeights(options.lineWingWeights),
     pointsPerHalfWidth,
     minStepCm,
     maxStepCm,

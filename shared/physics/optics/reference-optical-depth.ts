@@ -18,6 +18,7 @@ import {
   createLayerLineState,
   validateLayerForOptics,
 } from './layer-line-state'
+import { layerWingWeights, wingWeightOf } from './line-wing-weights'
 import { resolveOpticsOptions, type ReferenceOpticsOptions } from './optics-options'
 import { gridIndexRange, gridWavenumbersCm } from './spectral-grid'
 
@@ -56,7 +57,9 @@ export interface ReferenceOpticalDepthResult {
  * Method: τ_k(νₙ) = Σ_i A_ik · √(ln2/π)/α_D,i · [K(xₙ, y_i) − K_c], for every line i with
  * |νₙ − ν*_i| ≤ cutoff, where A_ik = S_i(T_k)·u_k (see `computeLayerLineState`),
  * xₙ = √ln2 (νₙ − ν*_i)/α_D,i, y_i = √ln2 γ_i/α_D,i, K_c = K(√ln2·cutoff/α_D,i, y_i) with pedestal
- * subtraction and 0 without; then the continuum hooks are added.
+ * subtraction and 0 without; for molecules with a far-wing weight χ (`lineWingWeights`) K is
+ * multiplied by χ(νₙ − ν*_i, T_k) beyond the weight's onset and K_c by χ(cutoff, T_k); then the
+ * continuum hooks are added.
  * Notes: K from the Weideman (1994) N = 40 series (`voigtKAccurateUnchecked`, arguments validated
  * through the line state; relative error ≤ 1e-8 for y ≥ 1e-6). No wing approximation, no
  * interpolation: the only errors are those of K and rounding. Cost ∝ lines × points, so use it on
@@ -104,21 +107,26 @@ export function computeReferenceOpticalDepth(
       partitionFunctionLookup: options.partitionFunctionLookup,
       molarMassLookup: options.molarMassLookup,
     })
+    const weights = layerWingWeights(options.lineWingWeights, layers[k].meanTemperatureK)
     for (let i = 0; i < state.length; i++) {
       const strength = state.integratedOpticalDepthCm[i]
       if (!(strength > 0)) continue
+      const weight = wingWeightOf(weights, slice.moleculeId[i])
       const centre = state.centreCm[i]
       const alphaD = state.dopplerHalfWidthCm[i]
       const scale = SQRT_LN2 / alphaD
       const y = state.lorentzHalfWidthCm[i] * scale
       const amplitude = (strength * SQRT_LN2_OVER_PI) / alphaD
-      const pedestal = options.subtractPedestal ? voigtKAccurateUnchecked(cutoff * scale, y) : 0
+      let pedestal = options.subtractPedestal ? voigtKAccurateUnchecked(cutoff * scale, y) : 0
+      if (weight !== undefined && cutoff > weight.onsetCm) pedestal *= weight.chi(cutoff)
       const first = Math.max(range.first, Math.ceil((centre - cutoff) / stepCm) - 1)
       const last = Math.min(range.last, Math.floor((centre + cutoff) / stepCm) + 1)
       for (let n = first; n <= last; n++) {
         const offset = n * stepCm - centre
         if (Math.abs(offset) > cutoff) continue
-        tau[n - range.first] += amplitude * (voigtKAccurateUnchecked(offset * scale, y) - pedestal)
+        let k = voigtKAccurateUnchecked(offset * scale, y)
+        if (weight !== undefined && Math.abs(offset) > weight.onsetCm) k *= weight.chi(offset)
+        tau[n - range.first] += amplitude * (k - pedestal)
         voigtEvaluations++
       }
     }
