@@ -5,70 +5,12 @@ import {
   parseLineRecord,
   parseLineRecords,
 } from '../../../../shared/physics/spectroscopy/line-record-parser'
+import { lineRecord, type RecordField } from '../../../fixtures/line-lists/record-builder'
 
-// Record layout of the 2004+ edition of the public database (Rothman et al. 2005, JQSRT 96, 139,
-// Table 1; from memory): [field, first column, last column, justification].
-const LAYOUT = [
-  ['molecule', 1, 2, 'right'],
-  ['isotopologue', 3, 3, 'right'],
-  ['wavenumber', 4, 15, 'right'],
-  ['intensity', 16, 25, 'right'],
-  ['einsteinA', 26, 35, 'right'],
-  ['gammaAir', 36, 40, 'right'],
-  ['gammaSelf', 41, 45, 'right'],
-  ['lowerEnergy', 46, 55, 'right'],
-  ['nAir', 56, 59, 'right'],
-  ['deltaAir', 60, 67, 'right'],
-  ['upperGlobal', 68, 82, 'left'],
-  ['lowerGlobal', 83, 97, 'left'],
-  ['upperLocal', 98, 112, 'left'],
-  ['lowerLocal', 113, 127, 'left'],
-  ['uncertainty', 128, 133, 'left'],
-  ['references', 134, 145, 'left'],
-  ['lineMixing', 146, 146, 'left'],
-  ['gUpper', 147, 153, 'right'],
-  ['gLower', 154, 160, 'right'],
-] as const
-
-type FieldName = (typeof LAYOUT)[number][0]
-
-// A record written by hand for these tests (invented values shaped like a CO2 ν₂ line; not a
-// database entry).
-const BASE: Record<FieldName, string> = {
-  molecule: '2',
-  isotopologue: '1',
-  wavenumber: '667.661235',
-  intensity: '3.215E-19',
-  einsteinA: '1.520E+00',
-  gammaAir: '.0721',
-  gammaSelf: '0.095',
-  lowerEnergy: '234.1234',
-  nAir: '0.75',
-  deltaAir: '-.001234',
-  upperGlobal: '       0 1 1 01',
-  lowerGlobal: '       0 0 0 01',
-  upperLocal: '',
-  lowerLocal: '     R 12e',
-  uncertainty: '366554',
-  references: ' 2 3 4 5 6 7',
-  lineMixing: '',
-  gUpper: '27.0',
-  gLower: '25.0',
-}
-
-/** Builds a 160-character record, padding each field to its exact columns. */
-function record(overrides: Partial<Record<FieldName, string>> = {}): string {
-  const values = { ...BASE, ...overrides }
-  let text = ''
-  for (const [name, first, last, justify] of LAYOUT) {
-    const width = last - first + 1
-    const value = values[name]
-    if (value.length > width) throw new Error(`fixture field ${name} wider than ${width}`)
-    expect(text.length).toBe(first - 1)
-    text += justify === 'right' ? value.padStart(width) : value.padEnd(width)
-  }
-  return text
-}
+// The record builder (layout of Rothman et al. 2005, JQSRT 96, 139, Table 1; from memory) and the
+// invented base record shaped like a CO2 ν₂ line are shared with the catalogue-import tests.
+type FieldName = RecordField
+const record = lineRecord
 
 function parseError(text: string, lineNumber = 7): PhysicsError {
   try {
