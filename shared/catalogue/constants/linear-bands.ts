@@ -10,7 +10,7 @@
  *
  * Accuracy (honest): the two strongest bands (CO2 ν₂ and ν₃) carry recalled values believed good
  * to ≈3–5 %; the laser bands are fitted to the 296 K Einstein A values of the public spectroscopic
- * database, HITRAN2020 (Gordon et al. 2022, JQSRT 277, 107949) (≈2 %); the first
+ * database, 2020 edition (Gordon et al. 2022, JQSRT 277, 107949) (≈2 %); the first
  * hot bands are recalled or harmonic estimates (≈10–20 %); the second hot bands are
  * harmonic-oscillator estimates with an assumed Fermi mixing (factor ~2; the interference-weakened
  * 11101–10002 band uncertain by a factor ~5); isotopologue bands scale the 626 values (≈5–10 %);
@@ -81,7 +81,7 @@ const HARMONIC =
   'COMPUTED harmonic-oscillator estimate from the 626 ν₂ band (method in the module comment)'
 const FERMI = `${HARMONIC}, with the assumed Fermi mixing cos²θ = 0.467 in both dyads`
 const LASER =
-  'COMPUTED: S_band and Herman–Wallis a₁, a₂ fitted to the 296 K Einstein A values of the public spectroscopic database, HITRAN2020 (Gordon et al. 2022, JQSRT 277, 107949), for J ≤ 103, from a public data excerpt of that list; the measurements behind them: Devi, Benner, Smith, Brown & Dulick 2003, JQSRT 76, 393 (VERIFIED existence)'
+  'COMPUTED: S_band and Herman–Wallis a₁, a₂ fitted to the 296 K Einstein A values of the public spectroscopic database, 2020 edition (Gordon et al. 2022, JQSRT 277, 107949), for J ≤ 103, from a public data excerpt of that list; the measurements behind them: Devi, Benner, Smith, Brown & Dulick 2003, JQSRT 76, 393 (VERIFIED existence)'
 const ISOTOPE =
   'COMPUTED: 626 band scaled by abundance, G-matrix ratio, Q_vib and stimulated emission'
 
