@@ -20,15 +20,10 @@
 import { PhysicsError } from '../errors'
 import { voigtKUnchecked } from '../spectroscopy'
 import type { LayerWingWeight } from './line-wing-weights'
+import { MAX_ZONES, pushInterval, storeMergedZones } from './zone-intervals'
 
 /** Most grid levels used. */
 const MAX_LEVELS = 40
-/**
- * Zone intervals stored per level and line (core, two edges, two per wing-weight kink, and
- * stencils of the level below).
- */
-const MAX_ZONES = 16
-
 /** Levels, masks, accumulators and per-line scratch of one chunk. */
 export interface MaskedMultigrid {
   levelCount: number
@@ -245,53 +240,7 @@ export function clearMaskedAccumulators(ws: MaskedMultigrid): void {
   }
 }
 
-function pushInterval(
-  ws: MaskedMultigrid,
-  count: number,
-  lo: number,
-  hi: number,
-  first: number,
-  last: number,
-): number {
-  const a = lo > first ? lo : first
-  const b = hi < last ? hi : last
-  if (a > b) return count
-  ws.scratchLo[count] = a
-  ws.scratchHi[count] = b
-  return count + 1
-}
 
-function storeMergedZones(ws: MaskedMultigrid, level: number, count: number): void {
-  const lo = ws.scratchLo
-  const hi = ws.scratchHi
-  for (let i = 1; i < count; i++) {
-    const a = lo[i]
-    const b = hi[i]
-    let j = i - 1
-    while (j >= 0 && lo[j] > a) {
-      lo[j + 1] = lo[j]
-      hi[j + 1] = hi[j]
-      j--
-    }
-    lo[j + 1] = a
-    hi[j + 1] = b
-  }
-  const base = level * MAX_ZONES
-  let stored = 0
-  for (let i = 0; i < count; i++) {
-    if (stored > 0 && lo[i] <= ws.zoneHi[base + stored - 1] + 1) {
-      if (hi[i] > ws.zoneHi[base + stored - 1]) ws.zoneHi[base + stored - 1] = hi[i]
-      continue
-    }
-    if (stored === MAX_ZONES) {
-      throw new PhysicsError('UNSUPPORTED', 'too many zone intervals for a line (internal limit)')
-    }
-    ws.zoneLo[base + stored] = lo[i]
-    ws.zoneHi[base + stored] = hi[i]
-    stored++
-  }
-  ws.zoneCount[level] = stored
-}
 
 /** |x| + y from which K uses Humlíček's one-pole region I (as `voigtKUnchecked`). */
 const REGION_I_MIN = 15

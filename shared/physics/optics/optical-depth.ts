@@ -87,13 +87,12 @@ import {
   type ResolvedOpticsOptions,
 } from './optics-options'
 import { gridIndexRange, gridWavenumbersCm } from './spectral-grid'
+import { MAX_ZONES, pushInterval, storeMergedZones } from './zone-intervals'
 
 const SQRT_LN2 = Math.sqrt(Math.LN2)
 const SQRT_LN2_OVER_PI = Math.sqrt(Math.LN2 / Math.PI)
 /** Most grid levels used (the top level is reached long before for any physical cutoff). */
 const MAX_LEVELS = 16
-/** Zone intervals stored per level and line (core, two edges, two per wing-weight kink). */
-const MAX_ZONES = 16
 /** Lines centred this far (in their own Voigt HWHM) outside the chunk still set the step. */
 const STEP_SEARCH_HALF_WIDTHS = 5
 /** Extra window searched for lines that set the step, cm⁻¹. */
@@ -302,55 +301,7 @@ function createWorkspace(
   return ws
 }
 
-/** Appends [lo, hi] ∩ [first, last] to the scratch list when not empty; returns the new count. */
-function pushInterval(
-  ws: Workspace,
-  count: number,
-  lo: number,
-  hi: number,
-  first: number,
-  last: number,
-): number {
-  const a = lo > first ? lo : first
-  const b = hi < last ? hi : last
-  if (a > b) return count
-  ws.scratchLo[count] = a
-  ws.scratchHi[count] = b
-  return count + 1
-}
 
-/** Sorts the scratch intervals, merges overlapping/adjacent ones and stores them for `level`. */
-function storeMergedZones(ws: Workspace, level: number, count: number): void {
-  const lo = ws.scratchLo
-  const hi = ws.scratchHi
-  for (let i = 1; i < count; i++) {
-    const a = lo[i]
-    const b = hi[i]
-    let j = i - 1
-    while (j >= 0 && lo[j] > a) {
-      lo[j + 1] = lo[j]
-      hi[j + 1] = hi[j]
-      j--
-    }
-    lo[j + 1] = a
-    hi[j + 1] = b
-  }
-  const base = level * MAX_ZONES
-  let stored = 0
-  for (let i = 0; i < count; i++) {
-    if (stored > 0 && lo[i] <= ws.zoneHi[base + stored - 1] + 1) {
-      if (hi[i] > ws.zoneHi[base + stored - 1]) ws.zoneHi[base + stored - 1] = hi[i]
-      continue
-    }
-    if (stored === MAX_ZONES) {
-      throw new PhysicsError('UNSUPPORTED', 'too many zone intervals for a line (internal limit)')
-    }
-    ws.zoneLo[base + stored] = lo[i]
-    ws.zoneHi[base + stored] = hi[i]
-    stored++
-  }
-  ws.zoneCount[level] = stored
-}
 
 /**
  * Adds one line (truncated Voigt × integrated optical depth) to the level accumulators.
