@@ -22,6 +22,7 @@ import { createColumnTransferBlock, solveColumnTransfer } from '../transfer/colu
 import { endCorrectedTrapezoidWeights } from '../transfer/end-corrected-trapezoid'
 import { solveSchwarzschild } from '../transfer/schwarzschild'
 import { trapezoidWeightsCm } from '../transfer/spectral-integration'
+import { createDetailSpectrum, detailPointRange, type DetailSpectrum } from './detail-spectrum'
 import type { ChunkBounds, PreparedComputation } from './prepare'
 
 /** Work done for one chunk (for benchmarks and logs; not needed to merge results). */
@@ -57,8 +58,15 @@ export interface ChunkResult {
   surfaceZenithRadianceBinned: Float64Array
   /** Bin-mean vertical transmittance from each level to space, [bin·nLevels + level]. */
   transmittanceToSpaceBinned: Float64Array
+  /** The chunk's share of the full-resolution window (absent when the window misses the chunk). */
+  detail?: DetailSpectrum
   /** Work done (optional; not stored with the run). */
   work?: ChunkWorkStats
+}
+
+/** An empty detail share for the grid points [first, end), or undefined when there are none. */
+function detailShare(range: { first: number; end: number }): DetailSpectrum | undefined {
+  return range.end > range.first ? createDetailSpectrum(range.end - range.first) : undefined
 }
 
 /** Points solved per block of the column solver (bounds the scratch to ≈ 3 MB for 61 levels). */
@@ -149,11 +157,22 @@ function computeAdaptiveChunk(prepared: PreparedComputation, chunk: ChunkBounds)
     nLevels,
     prepared.quadrature.mu.length,
   )
+  const detailRange = detailPointRange(nu, chunk, settings.detailWindow)
+  const detail = detailShare(detailRange)
   for (let first = 0; first < nGrid; first += block.capacity) {
     const count = Math.min(block.capacity, nGrid - first)
     solveColumnTransfer(input, first, count, block)
     for (let j = 0; j < count; j++) {
       const i = first + j
+      if (detail && i >= detailRange.first && i < detailRange.end) {
+        const k = i - detailRange.first
+        detail.wavenumberCm[k] = nu[i]
+        detail.olrSpectral[k] = block.fluxUp[j * nLevels + nLevels - 1]
+        detail.surfaceDownSpectral[k] = block.fluxDown[j * nLevels]
+        detail.toaNadirRadiance[k] = block.toaNadirRadiance[j]
+        detail.surfaceZenithRadiance[k] = block.surfaceZenithRadiance[j]
+        detail.columnTransmittance[k] = block.transmittanceToSpace[j * nLevels]
+      }
       // Each point counts towards the bin of the interval on its left and on its right (bin edges
       // are grid points, so no interval straddles one).
       const binLeft = i > 0 ? Math.floor(node[i - 1] / nodesPerBin) : -1
@@ -201,6 +220,7 @@ function computeAdaptiveChunk(prepared: PreparedComputation, chunk: ChunkBounds)
     toaNadirRadianceBinned,
     surfaceZenithRadianceBinned,
     transmittanceToSpaceBinned,
+    ...(detail ? { detail } : {}),
     work: {
       spectralMethod: 'adaptive',
       lineLayerCount: optics.stats.activeLineLayerCount,
@@ -320,6 +340,8 @@ function computeUniformChunk(
   const binWeight = new Float64Array(binCount)
   const transmittance = new Float64Array(nLevels)
 
+  const detailRange = detailPointRange(grid, chunk, settings.detailWindow)
+  const detail = detailShare(detailRange)
   const binWidth = settings.outputResolutionCm
   for (let i = 0; i < nGrid; i++) {
     // Trapezoid rule per bin: a point on a bin edge belongs half to each neighbouring bin.
@@ -341,6 +363,15 @@ function computeUniformChunk(
     for (let layer = nLayers - 1; layer >= 0; layer--) {
       tau += opticalDepth[layer][i]
       transmittance[layer] = Math.exp(-tau)
+    }
+    if (detail && i >= detailRange.first && i < detailRange.end) {
+      const k = i - detailRange.first
+      detail.wavenumberCm[k] = grid[i]
+      detail.olrSpectral[k] = solution.fluxUpSpectral[nLevels - 1][i]
+      detail.surfaceDownSpectral[k] = solution.fluxDownSpectral[0][i]
+      detail.toaNadirRadiance[k] = solution.toaRadianceUp[0][i]
+      detail.surfaceZenithRadiance[k] = solution.surfaceRadianceDown[0][i]
+      detail.columnTransmittance[k] = transmittance[0]
     }
     for (let part = 0; part < partCount; part++) {
       const bin = firstBin + part
@@ -381,6 +412,7 @@ function computeUniformChunk(
     toaNadirRadianceBinned,
     surfaceZenithRadianceBinned,
     transmittanceToSpaceBinned,
+    ...(detail ? { detail } : {}),
     work,
   }
 }

@@ -9,6 +9,7 @@ import { brightnessTemperatureK } from '../planck'
 import { heatingRateKPerDay } from '../transfer/heating-rate'
 import { ENGINE_VERSION } from '../../version'
 import type { ChunkResult } from './compute-chunk'
+import { detailBrightnessTemperatureK, joinDetailSpectra, type DetailSpectrum } from './detail-spectrum'
 import type { PreparedComputation } from './prepare'
 import type { ComputeSettings } from './settings'
 
@@ -53,6 +54,13 @@ export interface RadiationResult {
   lteRatio: Float64Array
   lteRisk: Uint8Array
   gridPointCount: number
+  /** Spectra at full resolution inside settings.detailWindow (null when no window was asked for). */
+  detail: FullResolutionDetail | null
+}
+
+/** The detail window's spectra with the brightness temperature of the nadir radiance, K. */
+export interface FullResolutionDetail extends DetailSpectrum {
+  toaBrightnessTemperatureK: Float64Array
 }
 
 export function mergeChunkResults(prepared: PreparedComputation, results: ChunkResult[]): RadiationResult {
@@ -111,6 +119,12 @@ export function mergeChunkResults(prepared: PreparedComputation, results: ChunkR
     emissionHeightM[b] = level.heightM
   }
 
+  let detail: FullResolutionDetail | null = null
+  if (settings.detailWindow) {
+    const joined = joinDetailSpectra(prepared.chunks.map((c) => byIndex.get(c.index)!.detail))
+    detail = { ...joined, toaBrightnessTemperatureK: detailBrightnessTemperatureK(joined) }
+  }
+
   const lte = lteCheck(levelPressurePa, levelTemperatureK)
   return {
     engineVersion: ENGINE_VERSION,
@@ -139,6 +153,7 @@ export function mergeChunkResults(prepared: PreparedComputation, results: ChunkR
     lteRatio: lte.ratio,
     lteRisk: lte.nonLteRisk,
     gridPointCount,
+    detail,
   }
 }
 

@@ -36,7 +36,24 @@ export interface ComputeSettings {
   spectralMethod?: SpectralMethod
   /** Tuning of the 'adaptive' method (defaults are the tested ones). */
   adaptive?: AdaptiveGridSettings
+  /**
+   * A window kept at the calculation's own spectral grid (no bin averaging), for line shapes and
+   * comparison with measured spectra; inside [startCm, endCm], at most MAX_DETAIL_WINDOW_WIDTH_CM wide.
+   */
+  detailWindow?: DetailWindow | null
 }
+
+/** Wavenumber window of the full-resolution output, cm⁻¹. */
+export interface DetailWindow {
+  startCm: number
+  endCm: number
+}
+
+/**
+ * Widest full-resolution window, cm⁻¹. The adaptive grid has up to ≈ 1 500 points per cm⁻¹ in the
+ * strongest bands of the built-in catalogue at 60 layers, so 100 cm⁻¹ stays below ≈ 150 000 points.
+ */
+export const MAX_DETAIL_WINDOW_WIDTH_CM = 100
 
 /** Spectral sampling of a chunk; see `ComputeSettings.spectralMethod`. */
 export type SpectralMethod = 'adaptive' | 'uniform' | 'reference'
@@ -129,6 +146,21 @@ export function resolveComputeSettings(partial: Partial<ComputeSettings> = {}): 
       }
     }
     s.adaptive = adaptive
+  }
+  if (s.detailWindow != null) {
+    const w = s.detailWindow
+    if (typeof w !== 'object' || !Number.isFinite(w.startCm) || !Number.isFinite(w.endCm)) {
+      bad('detailWindow', 'must be an object with numeric startCm and endCm')
+    }
+    if (!(w.startCm >= s.startCm && w.endCm <= s.endCm && w.startCm < w.endCm)) {
+      bad('detailWindow', `must lie inside the run's range ${s.startCm}–${s.endCm} cm⁻¹ and start below its end`)
+    }
+    if (w.endCm - w.startCm > MAX_DETAIL_WINDOW_WIDTH_CM) {
+      bad('detailWindow', `must be at most ${MAX_DETAIL_WINDOW_WIDTH_CM} cm⁻¹ wide`)
+    }
+    s.detailWindow = { startCm: w.startCm, endCm: w.endCm }
+  } else {
+    delete s.detailWindow
   }
   return s
 }
