@@ -37,7 +37,7 @@ export const scenarioHelp = `  Atmosphere:  --atmosphere ID (us-standard-1976, t
                temperatureK, heightM, vmr{H2O,O3,CO2,N2O,CH4}}]); --levels N (61), --top-pressure PA (10),
                --surface-temperature K, --emissivity E (1)
   Gases:       --co2 PPMV, --ch4 PPBV, --n2o PPBV (uniform dry-air mole fractions), --h2o-scale F, --o3-scale F
-  Spectrum:    --range START:END cm⁻¹ (10:3000), --resolution CM (1, output bins), --chunk CM (10),
+  Spectrum:    --range START:END cm⁻¹ (10:3000), --resolution CM (1, output bins), --chunk CM (20),
                --cutoff CM (25, line wings), --quadrature gauss-legendre:N | gauss-jacobi:N | diffusivity
                (gauss-legendre:3), --no-continuum
   Output:      --json (machine-readable), --quiet (no progress on stderr)`
@@ -96,7 +96,7 @@ export function settingsFromOptions(v: Values): Partial<ComputeSettings> {
     startCm,
     endCm,
     outputResolutionCm: requireNumber(v, 'resolution', 1),
-    chunkWidthCm: requireNumber(v, 'chunk', 10),
+    chunkWidthCm: requireNumber(v, 'chunk', 20),
     wingCutoffCm: requireNumber(v, 'cutoff', 25),
     waterVapourContinuum: !v['no-continuum'],
   }

@@ -76,11 +76,33 @@ export function createBuiltInPartitionFunctionLookup(): PartitionFunctionLookup 
     const key = `${moleculeId}/${isotopologueId}`
     let q = cache.get(key)
     if (q === undefined) {
-      q =
+      q = memoiseByTemperature(
         levelSumPartitionFunction(moleculeId, isotopologueId) ??
-        defaultPartitionFunctionLookup(moleculeId, isotopologueId)
+          defaultPartitionFunctionLookup(moleculeId, isotopologueId),
+      )
       cache.set(key, q)
     }
     return q
+  }
+}
+
+/** Most distinct temperatures remembered per function (a run has one per layer, plus 296 K). */
+const MEMO_TEMPERATURES = 512
+
+/**
+ * Remembers Q(T) for the temperatures asked for: the level sums cost thousands of terms, and every
+ * chunk of a run asks again for the same layer temperatures. Q is a pure function of T, so the
+ * cached value is the same number bit for bit.
+ */
+function memoiseByTemperature(q: PartitionFunction): PartitionFunction {
+  const values = new Map<number, number>()
+  return (temperatureK: number): number => {
+    let value = values.get(temperatureK)
+    if (value === undefined) {
+      value = q(temperatureK)
+      if (values.size >= MEMO_TEMPERATURES) values.clear()
+      values.set(temperatureK, value)
+    }
+    return value
   }
 }
