@@ -17,6 +17,7 @@ import { cataloguesRoutes } from './routes/catalogues.routes'
 import { healthRoutes } from './routes/health.routes'
 import { mixturesRoutes } from './routes/mixtures.routes'
 import { profilesRoutes } from './routes/profiles.routes'
+import { reviewsRoutes, runReviewsRoutes } from './routes/reviews.routes'
 import { runsRoutes } from './routes/runs.routes'
 import type { RunQueue } from './runs/run-queue'
 import { usersRoutes } from './routes/users.routes'
@@ -94,7 +95,9 @@ export function createApp({ config, sequelize, sessionPool, logger, clientDistDi
   api.use('/profiles', profilesRoutes())
   api.use('/mixtures', mixturesRoutes())
   api.use('/catalogues', cataloguesRoutes())
+  api.use('/runs/:id/reviews', runReviewsRoutes(sequelize))
   api.use('/runs', runsRoutes(sequelize, getRunQueue ?? (() => undefined)))
+  api.use('/reviews', reviewsRoutes(sequelize))
   api.use(apiNotFound)
   app.use('/api', api)
 

@@ -2,7 +2,7 @@ import type { Request, Response } from 'express'
 import type { Sequelize } from 'sequelize'
 import { TERMINAL_RUN_STATUSES, type CreateRunInput, type RunListQuery } from '../../shared/schemas/runs'
 import { AppError } from '../errors'
-import { CSV_TABLES, resultsCsv, type CsvTable } from '../runs/results-csv'
+import { CSV_TABLES, detailCsv, resultsCsv, type CsvTable } from '../runs/results-csv'
 import type { RunQueue } from '../runs/run-queue'
 import * as runs from '../runs/run.service'
 import { actorOf, idParam } from './request-helpers'
@@ -33,11 +33,17 @@ export function createRunsController(sequelize: Sequelize, getQueue: () => RunQu
     async results(req: Request, res: Response) {
       res.json(await runs.getRunResults(idParam(req)))
     },
+    async detail(req: Request, res: Response) {
+      res.json(await runs.getRunDetailSpectrum(idParam(req)))
+    },
     async resultsCsv(req: Request, res: Response) {
       const table = String(req.query.table ?? 'spectrum') as CsvTable
       if (!CSV_TABLES.includes(table)) throw AppError.badRequest(`table must be one of ${CSV_TABLES.join(', ')}.`, { field: 'table' })
       const id = idParam(req)
-      const csv = resultsCsv(await runs.getRunResults(id), table)
+      const csv =
+        table === 'detail'
+          ? detailCsv(await runs.getRunDetailSpectrum(id))
+          : resultsCsv(await runs.getRunResults(id), table)
       res.setHeader('Content-Type', 'text/csv; charset=utf-8')
       res.setHeader('Content-Disposition', `attachment; filename="tauline-run-${id}-${table}.csv"`)
       res.send(csv)

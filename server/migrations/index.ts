@@ -4,6 +4,8 @@ import * as m0003 from './0003-create-profiles'
 import * as m0004 from './0004-create-gas-mixtures'
 import * as m0005 from './0005-create-runs'
 import * as m0006 from './0006-create-line-catalogues'
+import * as m0007 from './0007-add-run-result-detail'
+import * as m0008 from './0008-create-reviews'
 
 /** Every migration in order. Add new ones at the end; never edit one that has shipped. */
 export const migrations = [
@@ -13,4 +15,6 @@ export const migrations = [
   { name: '0004-create-gas-mixtures', ...m0004 },
   { name: '0005-create-runs', ...m0005 },
   { name: '0006-create-line-catalogues', ...m0006 },
+  { name: '0007-add-run-result-detail', ...m0007 },
+  { name: '0008-create-reviews', ...m0008 },
 ]

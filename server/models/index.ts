@@ -2,6 +2,7 @@ import type { Sequelize } from 'sequelize'
 import { GasMixture } from './gas-mixture.model'
 import { CatalogueLineBlock, LineCatalogue, initLineCatalogueModels } from './line-catalogue.model'
 import { Profile } from './profile.model'
+import { Review } from './review.model'
 import { Run, RunChunk, RunResult } from './run.model'
 import { User } from './user.model'
 
@@ -13,6 +14,7 @@ export function initModels(sequelize: Sequelize) {
   Run.initModel(sequelize)
   RunChunk.initModel(sequelize)
   RunResult.initModel(sequelize)
+  Review.initModel(sequelize)
 
   Profile.belongsTo(User, { as: 'owner', foreignKey: 'ownerId' })
   GasMixture.belongsTo(User, { as: 'owner', foreignKey: 'ownerId' })
@@ -20,9 +22,12 @@ export function initModels(sequelize: Sequelize) {
   Run.hasMany(RunChunk, { as: 'chunks', foreignKey: 'runId' })
   RunChunk.belongsTo(Run, { foreignKey: 'runId' })
   Run.hasOne(RunResult, { as: 'result', foreignKey: 'runId' })
+  Run.hasMany(Review, { as: 'reviews', foreignKey: 'runId' })
+  Review.belongsTo(Run, { foreignKey: 'runId' })
+  Review.belongsTo(User, { as: 'reviewer', foreignKey: 'reviewerId' })
   initLineCatalogueModels(sequelize, User)
-  return { User, Profile, GasMixture, Run, RunChunk, RunResult }
+  return { User, Profile, GasMixture, Run, RunChunk, RunResult, Review }
 }
 
-export { GasMixture, Profile, Run, RunChunk, RunResult, User }
+export { GasMixture, Profile, Review, Run, RunChunk, RunResult, User }
 export { CatalogueLineBlock, LineCatalogue }

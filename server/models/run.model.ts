@@ -102,6 +102,8 @@ export class RunResult extends Model<InferAttributes<RunResult>, InferCreationAt
   declare runId: ForeignKey<Run['id']>
   declare summary: Record<string, unknown>
   declare data: Record<string, unknown>
+  /** Full-resolution spectra of the detail window (null when the run asked for none). */
+  declare detail: CreationOptional<Record<string, unknown> | null>
   declare createdAt: CreationOptional<Date>
 
   static initModel(sequelize: Sequelize): typeof RunResult {
@@ -110,6 +112,7 @@ export class RunResult extends Model<InferAttributes<RunResult>, InferCreationAt
         runId: { type: DataTypes.INTEGER, primaryKey: true },
         summary: { type: DataTypes.JSONB, allowNull: false },
         data: { type: DataTypes.JSONB, allowNull: false },
+        detail: { type: DataTypes.JSONB, allowNull: true },
         createdAt: DataTypes.DATE,
       },
       { sequelize, tableName: 'run_results', modelName: 'RunResult', updatedAt: false },

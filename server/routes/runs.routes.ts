@@ -18,6 +18,7 @@ export function runsRoutes(sequelize: Sequelize, getQueue: () => RunQueue | unde
   r.get('/:id/events', c.events)
   r.get('/:id/results', c.results)
   r.get('/:id/results.csv', c.resultsCsv)
+  r.get('/:id/results/detail', c.detail)
   r.post('/:id/cancel', write, c.cancel)
   r.delete('/:id', write, c.remove)
   return r

@@ -1,4 +1,5 @@
 import type { ChunkResult } from '../../shared/physics/engine/compute-chunk'
+import { DETAIL_FIELDS, type DetailSpectrum } from '../../shared/physics/engine/detail-spectrum'
 
 /**
  * Chunk results are stored with their float arrays as base64 of the raw IEEE-754 bytes, so a
@@ -18,12 +19,23 @@ const ARRAY_FIELDS = [
 
 const SCALAR_FIELDS = ['chunkIndex', 'startCm', 'endCm', 'firstBin', 'binCount', 'gridPointCount'] as const satisfies readonly (keyof ChunkResult)[]
 
+/** Key of a detail-window array in the stored form. */
+const detailKey = (field: string) => `detail.${field}`
+
+const encodeArray = (a: Float64Array) => Buffer.from(a.buffer, a.byteOffset, a.byteLength).toString('base64')
+
+function decodeArray(text: string): Float64Array {
+  const bytes = Buffer.from(text, 'base64')
+  // Copy into a fresh, aligned buffer.
+  return new Float64Array(bytes.buffer.slice(bytes.byteOffset, bytes.byteOffset + bytes.byteLength))
+}
+
 export function encodeChunkResult(result: ChunkResult): StoredChunkResult {
   const out: StoredChunkResult = {}
   for (const f of SCALAR_FIELDS) out[f] = result[f]
-  for (const f of ARRAY_FIELDS) {
-    const a = result[f]
-    out[f] = Buffer.from(a.buffer, a.byteOffset, a.byteLength).toString('base64')
+  for (const f of ARRAY_FIELDS) out[f] = encodeArray(result[f])
+  if (result.detail) {
+    for (const f of DETAIL_FIELDS) out[detailKey(f)] = encodeArray(result.detail[f])
   }
   return out
 }
@@ -31,10 +43,11 @@ export function encodeChunkResult(result: ChunkResult): StoredChunkResult {
 export function decodeChunkResult(stored: StoredChunkResult): ChunkResult {
   const out: Record<string, unknown> = {}
   for (const f of SCALAR_FIELDS) out[f] = stored[f]
-  for (const f of ARRAY_FIELDS) {
-    const bytes = Buffer.from(stored[f] as string, 'base64')
-    // Copy into a fresh, aligned buffer.
-    out[f] = new Float64Array(bytes.buffer.slice(bytes.byteOffset, bytes.byteOffset + bytes.byteLength))
+  for (const f of ARRAY_FIELDS) out[f] = decodeArray(stored[f] as string)
+  if (typeof stored[detailKey('wavenumberCm')] === 'string') {
+    const detail: Record<string, Float64Array> = {}
+    for (const f of DETAIL_FIELDS) detail[f] = decodeArray(stored[detailKey(f)] as string)
+    out.detail = detail as unknown as DetailSpectrum
   }
   return out as unknown as ChunkResult
 }

@@ -16,7 +16,8 @@ export async function startChunkWorkers(
   workerName = `${hostname()}:${process.pid}`,
 ): Promise<void> {
   for (let i = 0; i < deps.pool.size; i++) {
-    await queue.boss.work<ChunkJobData>(
+    const loop: { id?: string } = {}
+    loop.id = await queue.boss.work<ChunkJobData>(
       CHUNK_QUEUE,
       { batchSize: 1, pollingIntervalSeconds: 0.5, includeMetadata: true },
       async ([job]) => {
@@ -25,6 +26,9 @@ export async function startChunkWorkers(
           retryCount: job.retryCount,
           retryLimit: job.retryLimit,
         })
+        // pg-boss waits out the rest of the polling interval after every job; with chunks often
+        // shorter than that, ask for the next one at once (the queue is likely not empty).
+        if (loop.id) queue.boss.notifyWorker(loop.id)
       },
     )
   }

@@ -5,9 +5,14 @@ import { toLineTable } from '../../shared/physics/spectroscopy/line'
 import { Run, RunChunk, RunResult } from '../models/index'
 import { decodeChunkResult, type StoredChunkResult } from './chunk-codec'
 
+const arr = (a: ArrayLike<number>) => Array.from(a, (v) => (Number.isFinite(v) ? v : null))
+
 /** The stored, client-facing form of a run's results: plain arrays, NaN as null. */
-export function serialiseResult(r: RadiationResult): { summary: Record<string, unknown>; data: Record<string, unknown> } {
-  const arr = (a: ArrayLike<number>) => Array.from(a, (v) => (Number.isFinite(v) ? v : null))
+export function serialiseResult(r: RadiationResult): {
+  summary: Record<string, unknown>
+  data: Record<string, unknown>
+  detail: Record<string, unknown> | null
+} {
   const summary = {
     olrWPerM2: r.olrWPerM2,
     surfaceDownWPerM2: r.surfaceDownWPerM2,
@@ -42,7 +47,26 @@ export function serialiseResult(r: RadiationResult): { summary: Record<string, u
     },
     spectralFluxes: { fluxUpBinned: arr(r.fluxUpBinned), fluxDownBinned: arr(r.fluxDownBinned) },
   }
-  return { summary, data }
+  return { summary, data, detail: serialiseDetail(r) }
+}
+
+/** The full-resolution window in stored form, or null when the run asked for none. */
+function serialiseDetail(r: RadiationResult): Record<string, unknown> | null {
+  const d = r.detail
+  const window = r.settings.detailWindow
+  if (!d || !window) return null
+  return {
+    startCm: window.startCm,
+    endCm: window.endCm,
+    pointCount: d.wavenumberCm.length,
+    wavenumberCm: arr(d.wavenumberCm),
+    olrSpectral: arr(d.olrSpectral),
+    surfaceDownSpectral: arr(d.surfaceDownSpectral),
+    toaNadirRadiance: arr(d.toaNadirRadiance),
+    toaBrightnessTemperatureK: arr(d.toaBrightnessTemperatureK),
+    surfaceZenithRadiance: arr(d.surfaceZenithRadiance),
+    columnTransmittance: arr(d.columnTransmittance),
+  }
 }
 
 /** Merges every chunk of a finished run (in chunk order) and stores the results, inside `tx`. */
@@ -51,8 +75,8 @@ export async function finalizeRun(run: Run, tx: Transaction): Promise<void> {
   // Merging needs the levels and the chunk plan, not the lines.
   const prepared = prepareComputation(run.inputs.profile.snapshot, toLineTable([]), run.inputs.settings)
   const merged = mergeChunkResults(prepared, chunks.map((c) => decodeChunkResult(c.result as StoredChunkResult)))
-  const { summary, data } = serialiseResult(merged)
-  await RunResult.create({ runId: run.id, summary, data }, { transaction: tx })
+  const { summary, data, detail } = serialiseResult(merged)
+  await RunResult.create({ runId: run.id, summary, data, detail }, { transaction: tx })
   // Chunk payloads are no longer needed once merged; keep the rows for timing and provenance.
   await RunChunk.update({ result: null }, { where: { runId: run.id }, transaction: tx })
   run.status = 'succeeded'

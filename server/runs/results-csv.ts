@@ -2,21 +2,45 @@ import Papa from 'papaparse'
 import { AppError } from '../errors'
 
 type Results = Awaited<ReturnType<typeof import('./run.service').getRunResults>>
+type DetailSpectrum = Awaited<ReturnType<typeof import('./run.service').getRunDetailSpectrum>>
 
-export const CSV_TABLES = ['spectrum', 'levels', 'layers'] as const
+export const CSV_TABLES = ['spectrum', 'levels', 'layers', 'detail'] as const
 export type CsvTable = (typeof CSV_TABLES)[number]
 
+function csvHeader(runId: number, inputHash: string, engineVersion: string, extra: string[] = []): string {
+  return [
+    `# Tauline run ${runId}, input hash ${inputHash}, engine ${engineVersion}`,
+    ...extra,
+    '# Clear-sky, local thermodynamic equilibrium; see docs/PHYSICS.md for methods and limits.',
+  ].join('\n')
+}
+
+/** The full-resolution window as CSV: one row per point of the calculation's grid. */
+export function detailCsv(detail: DetailSpectrum): string {
+  const d = detail as unknown as Record<string, (number | null)[]> & { startCm: number; endCm: number }
+  const header = csvHeader(detail.runId, detail.inputHash, detail.engineVersion, [
+    `# Full-resolution window ${d.startCm}–${d.endCm} cm-1 on the calculation's own grid (not uniform: fine near line centres).`,
+  ])
+  const rows = d.wavenumberCm.map((_, i) => ({
+    'wavenumber_cm-1': d.wavenumberCm[i],
+    'olr_W_m-2_(cm-1)-1': d.olrSpectral[i],
+    'surface_down_W_m-2_(cm-1)-1': d.surfaceDownSpectral[i],
+    'toa_nadir_radiance_W_m-2_sr-1_(cm-1)-1': d.toaNadirRadiance[i],
+    toa_brightness_temperature_K: d.toaBrightnessTemperatureK[i],
+    'surface_zenith_radiance_W_m-2_sr-1_(cm-1)-1': d.surfaceZenithRadiance[i],
+    column_transmittance: d.columnTransmittance[i],
+  }))
+  return `${header}\n${Papa.unparse(rows)}\n`
+}
+
 /** One results table as CSV with units in the column names. */
-export function resultsCsv(results: Results, table: CsvTable): string {
+export function resultsCsv(results: Results, table: Exclude<CsvTable, 'detail'>): string {
   const r = results as unknown as {
     spectrum: Record<string, (number | null)[]>
     levels: Record<string, (number | null)[]>
     layers: Record<string, (number | null)[]>
   }
-  const header = [
-    `# Tauline run ${results.runId}, input hash ${results.inputHash}, engine ${results.engineVersion}`,
-    '# Clear-sky, local thermodynamic equilibrium; see docs/PHYSICS.md for methods and limits.',
-  ].join('\n')
+  const header = csvHeader(results.runId, results.inputHash, results.engineVersion)
   let rows: Record<string, number | null>[]
   if (table === 'spectrum') {
     const s = r.spectrum

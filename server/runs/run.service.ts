@@ -1,14 +1,15 @@
-import { Op, type Sequelize, type WhereOptions } from 'sequelize'
+import { literal, Op, type Sequelize, type WhereOptions } from 'sequelize'
 import { planChunks } from '../../shared/physics/engine/prepare'
 import type { Page } from '../../shared/schemas/paging'
 import { TERMINAL_RUN_STATUSES, type CreateRunInput, type RunDetail, type RunListQuery, type RunSummary } from '../../shared/schemas/runs'
 import { AppError } from '../errors'
 import { Run, RunChunk, RunResult, User } from '../models/index'
 import { assertCanModify, type Actor } from '../services/access'
+import { assertNotSignedOff, signOffsOf, type SignOffInfo } from '../services/review.service'
 import { runInputHash, snapshotRunInputs } from './run-inputs'
 import type { RunQueue } from './run-queue'
 
-function toSummary(run: Run, olr: number | null = null): RunSummary {
+function toSummary(run: Run, olr: number | null = null, signOff?: SignOffInfo): RunSummary {
   const elapsedS = run.startedAt ? (Date.now() - run.startedAt.getTime()) / 1000 : null
   const etaSeconds =
     run.status === 'running' && elapsedS !== null && run.chunksDone > 0
@@ -35,6 +36,9 @@ function toSummary(run: Run, olr: number | null = null): RunSummary {
     computeMs: run.computeMs,
     etaSeconds,
     olrWPerM2: olr,
+    signedOff: signOff !== undefined,
+    signedOffBy: signOff?.reviewerName ?? null,
+    signedOffAt: signOff?.signedAt.toISOString() ?? null,
   }
 }
 
@@ -87,23 +91,39 @@ export async function createRun(sequelize: Sequelize, queue: RunQueue, actor: Ac
   return { ...(await getRun(run.id)), mixtureWarnings: warnings }
 }
 
+/**
+ * The part of the frozen inputs a summary shows. A list reads only this, not the profile snapshot
+ * (~15 kB of levels a run), which would otherwise be sent and parsed for every row.
+ */
+const SUMMARY_INPUTS = literal(
+  `jsonb_build_object('profile', jsonb_build_object('name', "Run"."inputs" #> '{profile,name}'), ` +
+    `'mixture', jsonb_build_object('name', "Run"."inputs" #> '{mixture,name}'), ` +
+    `'settings', jsonb_build_object('startCm', "Run"."inputs" #> '{settings,startCm}', 'endCm', "Run"."inputs" #> '{settings,endCm}'))`,
+)
+
 export async function listRuns(actor: Actor, query: RunListQuery): Promise<Page<RunSummary>> {
   const where: WhereOptions<Run> = {}
   if (query.status) Object.assign(where, { status: query.status })
   if (query.mine === 'true') Object.assign(where, { ownerId: actor.id })
   if (query.search) Object.assign(where, { name: { [Op.iLike]: `%${query.search}%` } })
-  const { rows, count } = await Run.findAndCountAll({
-    where,
-    include: [
-      { model: User, as: 'owner', attributes: ['displayName'] },
-      { model: RunResult, as: 'result', attributes: ['summary'] },
-    ],
-    order: [['id', 'DESC']],
-    limit: query.pageSize,
-    offset: (query.page - 1) * query.pageSize,
-  })
+  // The count needs no joins; both queries run at once.
+  const [count, rows] = await Promise.all([
+    Run.count({ where }),
+    Run.findAll({
+      where,
+      attributes: { exclude: ['inputs'], include: [[SUMMARY_INPUTS, 'inputs']] },
+      include: [
+        { model: User, as: 'owner', attributes: ['displayName'] },
+        { model: RunResult, as: 'result', attributes: ['summary'] },
+      ],
+      order: [['id', 'DESC']],
+      limit: query.pageSize,
+      offset: (query.page - 1) * query.pageSize,
+    }),
+  ])
   const olr = (r: Run) => ((r as unknown as { result?: RunResult }).result?.summary?.olrWPerM2 as number | undefined) ?? null
-  return { items: rows.map((r) => toSummary(r, olr(r))), total: count, page: query.page, pageSize: query.pageSize }
+  const signOffs = await signOffsOf(rows.map((r) => r.id))
+  return { items: rows.map((r) => toSummary(r, olr(r), signOffs.get(r.id))), total: count, page: query.page, pageSize: query.pageSize }
 }
 
 async function findOrFail(id: number): Promise<Run> {
@@ -113,9 +133,19 @@ async function findOrFail(id: number): Promise<Run> {
 }
 
 export async function getRun(id: number): Promise<RunDetail> {
-  const run = await findOrFail(id)
-  const result = await RunResult.findByPk(id, { attributes: ['summary'] })
-  return { ...toSummary(run, (result?.summary?.olrWPerM2 as number | undefined) ?? null), inputs: run.inputs }
+  // The run, its owner and its result summary in one query, the sign-off alongside.
+  const [run, signOffs] = await Promise.all([
+    Run.findByPk(id, {
+      include: [
+        { model: User, as: 'owner', attributes: ['displayName'] },
+        { model: RunResult, as: 'result', attributes: ['summary'] },
+      ],
+    }),
+    signOffsOf([id]),
+  ])
+  if (!run) throw AppError.notFound('Run')
+  const result = (run as unknown as { result?: RunResult }).result
+  return { ...toSummary(run, (result?.summary?.olrWPerM2 as number | undefined) ?? null, signOffs.get(id)), inputs: run.inputs }
 }
 
 /** Progress only, cheap enough to poll every second. */
@@ -151,14 +181,32 @@ export async function cancelRun(sequelize: Sequelize, queue: RunQueue, actor: Ac
 export async function deleteRun(sequelize: Sequelize, queue: RunQueue, actor: Actor, id: number): Promise<void> {
   const run = await findOrFail(id)
   assertCanModify(actor, run.ownerId, 'run')
+  // A run still computing cannot be signed off, so stopping it first is safe.
   if (!TERMINAL_RUN_STATUSES.includes(run.status)) await cancelRun(sequelize, queue, actor, id)
-  await run.destroy()
+  await sequelize.transaction(async (tx) => {
+    // The same row lock as a sign-off takes, so the two cannot interleave.
+    await Run.findByPk(id, { transaction: tx, lock: tx.LOCK.UPDATE })
+    await assertNotSignedOff(id, 'it cannot be deleted', tx)
+    await Run.destroy({ where: { id }, transaction: tx })
+  })
 }
 
 export async function getRunResults(id: number) {
   const run = await findOrFail(id)
   if (run.status !== 'succeeded') throw AppError.conflict(`The run has no results yet (status: ${run.status}).`)
-  const result = await RunResult.findByPk(id)
+  // The full-resolution window is served on its own (getRunDetailSpectrum).
+  const result = await RunResult.findByPk(id, { attributes: ['runId', 'summary', 'data'] })
   if (!result) throw AppError.notFound('Run results')
   return { runId: id, inputHash: run.inputHash, engineVersion: run.engineVersion, summary: result.summary, ...result.data }
+}
+
+/** The run's full-resolution window; 404 when the run did not ask for one. */
+export async function getRunDetailSpectrum(id: number) {
+  const run = await findOrFail(id)
+  if (run.status !== 'succeeded') throw AppError.conflict(`The run has no results yet (status: ${run.status}).`)
+  const result = await RunResult.findByPk(id, { attributes: ['runId', 'detail'] })
+  if (!result?.detail) {
+    throw new AppError(404, 'NOT_FOUND', 'This run has no full-resolution window: set one in the spectral settings of a new run.')
+  }
+  return { runId: id, inputHash: run.inputHash, engineVersion: run.engineVersion, ...result.detail }
 }

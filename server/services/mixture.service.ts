@@ -4,6 +4,7 @@ import type { ListQuery, Page } from '../../shared/schemas/paging'
 import { AppError } from '../errors'
 import { GasMixture, User } from '../models/index'
 import { assertCanModify, type Actor } from './access'
+import { pageTotal } from './page-total'
 
 function toSummary(m: GasMixture): MixtureSummary {
   return {
@@ -20,14 +21,15 @@ function toSummary(m: GasMixture): MixtureSummary {
 
 export async function listMixtures(query: ListQuery): Promise<Page<MixtureSummary>> {
   const where: WhereOptions = query.search ? { name: { [Op.iLike]: `%${query.search}%` } } : {}
-  const { rows, count } = await GasMixture.findAndCountAll({
+  const rows = await GasMixture.findAll({
     where,
     include: [{ model: User, as: 'owner', attributes: ['displayName'] }],
     order: [['updatedAt', 'DESC'], ['id', 'DESC']],
     limit: query.pageSize,
     offset: (query.page - 1) * query.pageSize,
   })
-  return { items: rows.map(toSummary), total: count, page: query.page, pageSize: query.pageSize }
+  const total = await pageTotal(query, rows.length, () => GasMixture.count({ where }))
+  return { items: rows.map(toSummary), total, page: query.page, pageSize: query.pageSize }
 }
 
 async function findOrFail(id: number): Promise<GasMixture> {

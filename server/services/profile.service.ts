@@ -6,6 +6,7 @@ import type { ProfileDetail, ProfileInput, ProfileSummary } from '../../shared/s
 import { AppError } from '../errors'
 import { Profile, User } from '../models/index'
 import { assertCanModify, type Actor } from './access'
+import { pageTotal } from './page-total'
 
 function toSummary(p: Profile): ProfileSummary {
   return {
@@ -48,7 +49,7 @@ export async function listProfiles(query: ListQuery): Promise<Page<ProfileSummar
   const where: WhereOptions = query.search
     ? { [Op.or]: [{ name: { [Op.iLike]: `%${query.search}%` } }, { description: { [Op.iLike]: `%${query.search}%` } }] }
     : {}
-  const { rows, count } = await Profile.findAndCountAll({
+  const rows = await Profile.findAll({
     where,
     attributes: { exclude: ['levels'] },
     include: [{ model: User, as: 'owner', attributes: ['displayName'] }],
@@ -56,7 +57,8 @@ export async function listProfiles(query: ListQuery): Promise<Page<ProfileSummar
     limit: query.pageSize,
     offset: (query.page - 1) * query.pageSize,
   })
-  return { items: rows.map(toSummary), total: count, page: query.page, pageSize: query.pageSize }
+  const total = await pageTotal(query, rows.length, () => Profile.count({ where }))
+  return { items: rows.map(toSummary), total, page: query.page, pageSize: query.pageSize }
 }
 
 async function findOrFail(id: number): Promise<Profile> {

@@ -1,5 +1,5 @@
 import { z } from 'zod'
-import type { ComputeSettings } from '../physics/engine/settings'
+import { MAX_DETAIL_WINDOW_WIDTH_CM, type ComputeSettings } from '../physics/engine/settings'
 import type { AtmosphereProfile } from '../physics/types'
 import type { MixtureGases } from './mixtures'
 
@@ -12,7 +12,7 @@ export const runSettingsSchema = z
   .object({
     startCm: z.number().min(1).max(5000).default(10),
     endCm: z.number().min(2).max(5000).default(3000),
-    chunkWidthCm: z.number().min(0.5).max(200).default(10),
+    chunkWidthCm: z.number().min(0.5).max(200).default(20),
     outputResolutionCm: z.number().min(0.01).max(50).default(1),
     wingCutoffCm: z.number().min(1).max(100).default(25),
     quadrature: z
@@ -25,11 +25,28 @@ export const runSettingsSchema = z
     layerSource: z.enum(['linear-in-tau', 'isothermal']).default('linear-in-tau'),
     waterVapourContinuum: z.boolean().default(true),
     co2SubLorentzianWings: z.boolean().default(true),
+    /** Optional window kept at the calculation's own grid (full resolution). */
+    detailWindow: z
+      .object({ startCm: z.number().min(1).max(5000), endCm: z.number().min(1).max(5000) })
+      .nullable()
+      .optional(),
   })
   .refine((s) => s.startCm < s.endCm, { message: 'The range must start below its end.', path: ['endCm'] })
   .refine((s) => (s.endCm - s.startCm) / s.outputResolutionCm <= 200_000, {
     message: 'At most 200 000 output bins: choose a coarser output resolution.',
     path: ['outputResolutionCm'],
+  })
+  .refine((s) => !s.detailWindow || (s.detailWindow.startCm >= s.startCm && s.detailWindow.endCm <= s.endCm), {
+    message: "The full-resolution window must lie inside the run's range.",
+    path: ['detailWindow'],
+  })
+  .refine((s) => !s.detailWindow || s.detailWindow.startCm < s.detailWindow.endCm, {
+    message: 'The full-resolution window must start below its end.',
+    path: ['detailWindow', 'endCm'],
+  })
+  .refine((s) => !s.detailWindow || s.detailWindow.endCm - s.detailWindow.startCm <= MAX_DETAIL_WINDOW_WIDTH_CM, {
+    message: `The full-resolution window can be at most ${MAX_DETAIL_WINDOW_WIDTH_CM} cm⁻¹ wide.`,
+    path: ['detailWindow'],
   })
 export type RunSettingsInput = z.input<typeof runSettingsSchema>
 
@@ -83,6 +100,11 @@ export interface RunSummary {
   /** Seconds still expected, from the pace so far; null when unknown. */
   etaSeconds: number | null
   olrWPerM2: number | null
+  /** A reviewer signed the run off: it is frozen (no more reviews, no delete). */
+  signedOff: boolean
+  /** Display name of the reviewer who signed it off. */
+  signedOffBy: string | null
+  signedOffAt: string | null
 }
 
 export interface RunDetail extends RunSummary {
