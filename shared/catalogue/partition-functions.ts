@@ -67,7 +67,7 @@ function levelSumPartitionFunction(
  * look-up). The returned functions are pure; the look-up's cache only avoids rebuilding them.
  * Dimensionless.
  * Source: published Q(296) for comparison: Gordon et al. 2022, JQSRT 277, 107949 (isotopologue
- * table; REFERENCES §3a, §4); level sums: Herzberg 1945, Infrared and Raman Spectra, ch. V (from
+ * table); level sums: Herzberg 1945, Infrared and Raman Spectra, ch. V (from
  * memory).
  */
 export function createBuiltInPartitionFunctionLookup(): PartitionFunctionLookup {

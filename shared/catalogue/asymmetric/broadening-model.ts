@@ -23,7 +23,7 @@ export interface LineBroadening {
  * δ_air constant (the fields of `BroadeningModel`).
  * Notes: a smooth representative model, not a line-by-line fit; real H2O widths scatter by a
  * factor ~2 around it at fixed J″. Units cm⁻¹ atm⁻¹ at 296 K.
- * Source: the per-table sources in constants/*.ts (REFERENCES §4, MEMORY-low).
+ * Source: the per-table sources in constants/*.ts (from memory, low confidence).
  * @param jLower J″ ≥ 0
  */
 export function lineBroadening(model: BroadeningModel, jLower: number): LineBroadening {

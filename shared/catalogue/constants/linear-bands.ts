@@ -16,7 +16,7 @@
  * 11101–10002 band uncertain by a factor ~5); isotopologue bands scale the 626 values (≈5–10 %);
  * N2O band intensities are recalled with low confidence (≈20–50 %).
  *
- * Harmonic estimates (COMPUTED rows) use S_hot/S_fund = (U/2) e^{−c₂G″/T} (ν_hot/ν_fund)
+ * Harmonic estimates (computed here) use S_hot/S_fund = (U/2) e^{−c₂G″/T} (ν_hot/ν_fund)
  * [1 − e^{−c₂ν_hot/T}]/[1 − e^{−c₂ν_fund/T}] at T = 296 K, with U the squared bending-dipole matrix
  * elements of the 2-D harmonic oscillator summed over the lower l-components,
  * |⟨v+1, l±1|q±|v, l⟩|² ∝ (v ± l + 2)/2 (Herzberg 1945, Infrared and Raman Spectra, ch. II; from
@@ -78,12 +78,12 @@ export function bandOriginCm(band: LinearBandConstants): number {
 }
 
 const HARMONIC =
-  'COMPUTED harmonic-oscillator estimate from the 626 ν₂ band (method in the module comment)'
+  'harmonic-oscillator estimate computed here from the 626 ν₂ band (method in the module comment)'
 const FERMI = `${HARMONIC}, with the assumed Fermi mixing cos²θ = 0.467 in both dyads`
 const LASER =
-  'COMPUTED: S_band and Herman–Wallis a₁, a₂ fitted to the 296 K Einstein A values of the public spectroscopic database, 2020 edition (Gordon et al. 2022, JQSRT 277, 107949), for J ≤ 103, from a public data excerpt of that list; the measurements behind them: Devi, Benner, Smith, Brown & Dulick 2003, JQSRT 76, 393 (VERIFIED existence)'
+  'computed here: S_band and Herman–Wallis a₁, a₂ fitted to the 296 K Einstein A values of the public spectroscopic database, 2020 edition (Gordon et al. 2022, JQSRT 277, 107949), for J ≤ 103, from a public data excerpt of that list; the measurements behind them: Devi, Benner, Smith, Brown & Dulick 2003, JQSRT 76, 393'
 const ISOTOPE =
-  'COMPUTED: 626 band scaled by abundance, G-matrix ratio, Q_vib and stimulated emission'
+  'computed here: 626 band scaled by abundance, G-matrix ratio, Q_vib and stimulated emission'
 
 function co2(
   code: '626' | '636' | '628',
@@ -145,7 +145,7 @@ export const LINEAR_BANDS: readonly LinearBandConstants[] = [
     C626.L00001,
     7.9e-18,
     'CO2 ν₂ fundamental (15 µm)',
-    'REFERENCES §3c (from memory; ≈48 km/mol), consistent with A = 1.52 s⁻¹ (REFERENCES §9)',
+    'from memory (≈48 km/mol); the Einstein A it implies, 1.52 s⁻¹ (computed here), is close to the 1.3–1.5 s⁻¹ quoted in the literature (from memory)',
     'MEMORY',
   ),
   co2(
@@ -154,7 +154,7 @@ export const LINEAR_BANDS: readonly LinearBandConstants[] = [
     C626.L01101,
     6.2e-19,
     'CO2 first hot band 02201–01101',
-    `REFERENCES §3c (from memory); ${HARMONIC} gives 6.17e-19`,
+    `from memory; ${HARMONIC} gives 6.17e-19`,
     'MEMORY',
   ),
   co2(
@@ -163,7 +163,7 @@ export const LINEAR_BANDS: readonly LinearBandConstants[] = [
     C626.L01101,
     1.4e-19,
     'CO2 hot band 10002–01101 (618 cm⁻¹)',
-    'REFERENCES §3c (from memory, low confidence); harmonic sum of the two Fermi partners 3.1e-19',
+    'from memory, low confidence; harmonic sum of the two Fermi partners 3.1e-19',
     'MEMORY-low',
   ),
   co2(
@@ -172,7 +172,7 @@ export const LINEAR_BANDS: readonly LinearBandConstants[] = [
     C626.L01101,
     1.9e-19,
     'CO2 hot band 10001–01101 (721 cm⁻¹)',
-    'REFERENCES §3c (from memory, low confidence); harmonic sum of the two Fermi partners 3.1e-19',
+    'from memory, low confidence; harmonic sum of the two Fermi partners 3.1e-19',
     'MEMORY-low',
   ),
   co2(
@@ -181,7 +181,7 @@ export const LINEAR_BANDS: readonly LinearBandConstants[] = [
     C626.L02201,
     3.6e-20,
     'CO2 second hot band 03301–02201',
-    `REFERENCES §3c; ${HARMONIC} gives 3.60e-20`,
+    `${HARMONIC} gives 3.60e-20`,
     'COMPUTED',
   ),
   co2(
@@ -226,7 +226,7 @@ export const LINEAR_BANDS: readonly LinearBandConstants[] = [
     C626.L10002,
     7.9e-22,
     'CO2 second hot band 11101–10002 (791 cm⁻¹)',
-    `${FERMI}; destructive interference makes this value uncertain by a factor ~5 (REFERENCES §11 suggests ~5e-21)`,
+    `${FERMI}; destructive interference makes this value uncertain by a factor ~5 (~5e-21 from memory)`,
     'MEMORY-low',
   ),
   co2(
@@ -255,7 +255,7 @@ export const LINEAR_BANDS: readonly LinearBandConstants[] = [
     C626.L00001,
     9.6e-17,
     'CO2 ν₃ fundamental (4.3 µm)',
-    'REFERENCES §3c (from memory: 9.5–9.7e-17, ≈550 km/mol)',
+    'from memory (9.5–9.7e-17, ≈550 km/mol)',
     'MEMORY',
   ),
   co2(
@@ -264,7 +264,7 @@ export const LINEAR_BANDS: readonly LinearBandConstants[] = [
     C636.L00001,
     8.28e-20,
     '¹³CO₂ ν₂ fundamental',
-    `${ISOTOPE} (G ratio 0.944); REFERENCES §3c gives ≈8.8e-20 without the G ratio`,
+    `${ISOTOPE} (G ratio 0.944); scaling by abundance alone gives ≈8.8e-20`,
     'COMPUTED',
   ),
   co2(
@@ -290,7 +290,7 @@ export const LINEAR_BANDS: readonly LinearBandConstants[] = [
     N446.L0000,
     9.0e-19,
     'N2O ν₂ fundamental (17 µm)',
-    'from memory (≈24 cm⁻² atm⁻¹ at STP, i.e. ≈5.6 km/mol); REFERENCES §4 gives 5–10e-19 (MEMORY-low); primary: Toth 1984, Appl. Opt. 23, 1825 and Landolt–Börnstein II/20 B3 (not at hand)',
+    'from memory (≈24 cm⁻² atm⁻¹ at STP, i.e. ≈5.6 km/mol; another recollection gives 5–10e-19, low confidence); primary: Toth 1984, Appl. Opt. 23, 1825 and Landolt–Börnstein II/20 B3 (not at hand)',
     'MEMORY-low',
   ),
   n2o(
@@ -298,7 +298,7 @@ export const LINEAR_BANDS: readonly LinearBandConstants[] = [
     N446.L0000,
     9.0e-18,
     'N2O ν₁ fundamental (7.8 µm)',
-    'from memory (≈240 cm⁻² atm⁻¹ at STP, ≈50–58 km/mol); REFERENCES §4 gives ≈1e-17 (MEMORY-low); primary: Toth 1984, Appl. Opt. 23, 1825 (not at hand)',
+    'from memory (≈240 cm⁻² atm⁻¹ at STP, ≈50–58 km/mol; another recollection gives ≈1e-17, low confidence); primary: Toth 1984, Appl. Opt. 23, 1825 (not at hand)',
     'MEMORY-low',
   ),
   n2o(
@@ -306,7 +306,7 @@ export const LINEAR_BANDS: readonly LinearBandConstants[] = [
     N446.L0000,
     5.0e-17,
     'N2O ν₃ fundamental (4.5 µm)',
-    'from memory (≈275 km/mol; strongest lines ≈1e-18); REFERENCES §4 gives ≈1e-16 (MEMORY-low) — the two recollections differ by 2×; primary: Landolt–Börnstein II/20 B3 (not at hand)',
+    'from memory (≈275 km/mol; strongest lines ≈1e-18; another recollection gives ≈1e-16, low confidence — the two recollections differ by 2×); primary: Landolt–Börnstein II/20 B3 (not at hand)',
     'MEMORY-low',
   ),
 ]

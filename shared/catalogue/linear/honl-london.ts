@@ -18,7 +18,7 @@ export type BranchDeltaJ = -1 | 0 | 1
  * (J−1)/2; for Σ–Σ to J+1 and J.
  * Notes: dimensionless; |Δl| ≤ 1 only (throws UNSUPPORTED otherwise). The factors are those of the
  * (e + f) pair; see `band-generator.ts` for how a pair is split between e and f sublevels.
- * Source: REFERENCES §3c (MEMORY); Herzberg 1945, Infrared and Raman Spectra, ch. IV, Table of
+ * Source: Herzberg 1945, Infrared and Raman Spectra, ch. IV, Table of
  * intensity factors for linear molecules (from memory).
  * @param deltaJ branch (−1 P, 0 Q, +1 R)
  * @param lowerJ J″ (integer ≥ l″)

@@ -109,7 +109,7 @@ function checkLevelQuanta(isotopologue: LinearIsotopologueConstants): void {
  * Accepts 10–1000 K.
  * Source: statistical thermodynamics of linear molecules, Herzberg 1945, Infrared and Raman
  * Spectra, ch. V (from memory); nuclear statistics as `nuclearSpinWeight`; published Q(296) for
- * comparison: Gordon et al. 2022, JQSRT 277, 107949 (isotopologue table, REFERENCES §3a, §4).
+ * comparison: Gordon et al. 2022, JQSRT 277, 107949 (isotopologue table).
  * @param isotopologue isotopologue constants
  */
 export function linearPartitionFunction(

@@ -19,7 +19,7 @@ import type { RotationalParity } from './rotational-energy'
  * Notes: the state-independent factor g_i (e.g. 2 for ¹³C, 9 for ¹⁴N₂) is NOT included here; it is
  * carried by the partition function and the statistical weights, as in the database convention.
  * Source: Herzberg 1945, Infrared and Raman Spectra, ch. I–IV (symmetry of rotational levels and
- * nuclear statistics; from memory); REFERENCES §3a (MEMORY, standard).
+ * nuclear statistics; from memory).
  * @param isotopologue isotopologue constants
  * @param level vibrational level
  * @param j J (integer ≥ l)

@@ -8,7 +8,7 @@
  *
  * The parameter values are our own round choices, guided by the published surface temperatures
  * of the standard model atmospheres (Anderson et al. 1986, AFGL-TR-86-0110: 299.7, 294.2, 272.2,
- * 287.2, 257.2 K — from memory, REFERENCES.md §7b). They are not a reproduction of any table.
+ * 287.2, 257.2 K — from memory). They are not a reproduction of any table.
  */
 import {
   DRY_AIR_MOLAR_MASS_KG_PER_MOL,

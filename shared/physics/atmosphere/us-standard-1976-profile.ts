@@ -30,8 +30,8 @@ import {
 
 /**
  * Ozone for the standard profile: 345 DU total (the column of the 1976 mid-latitude ozone model,
- * ≈345 DU, from memory — REFERENCES.md §10), density peak at 22 km, width 5 km (our choice, close
- * to the Lacis & Hansen 1974 mid-latitude b = 20 km, c = 5 km).
+ * ≈345 DU; Krueger & Minzner 1976, JGR; from memory), density peak at 22 km, width 5 km (our
+ * choice, close to the Lacis & Hansen 1974 mid-latitude b = 20 km, c = 5 km).
  */
 export const US76_DEFAULT_OZONE: Readonly<GreenOzoneParameters> = {
   totalColumnDu: 345,

@@ -21,7 +21,7 @@ export const MANABE_WETHERALD_SURFACE_RELATIVE_HUMIDITY = 0.77
  * Method: RH = RH* (Q − 0.02)/(1 − 0.02), Q = p/p_s, and RH = 0 where Q ≤ 0.02.
  * Notes: a fixed-relative-humidity idealisation; RH falls roughly linearly with pressure.
  * Source: Manabe & Wetherald 1967, J. Atmos. Sci. 24, 241–259, eq. (2) (form and equation
- * number from memory; REFERENCES.md §10).
+ * number from memory).
  *
  * @param pressurePa pressure, Pa
  * @param surfacePressurePa surface pressure p_s, Pa

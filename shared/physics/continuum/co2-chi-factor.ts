@@ -10,16 +10,20 @@
  * σ₁ = 3, σ₂ = 30, σ₃ = 120 cm⁻¹; B₁ = 0.0888 − 0.16 e^{−0.0041 T}, B₂ = 0.0526 e^{−0.00152 T},
  * B₃ = 0.0232 (cm⁻¹)⁻¹, T in K.
  *
- * Confidence: MEMORY-low — the form and coefficients are recalled (REFERENCES §3e) and must be
- * checked against the paper before any result depends on them quantitatively. They were derived
- * for CO2–N2 in the 4.3 µm band wing (≈193 K to above room temperature); applying them to air
- * broadening and to the 15 µm band is an approximation (the real χ depends on the band and is
- * asymmetric about the line centre; REFERENCES §3e).
+ * Confidence: from memory, low confidence — the form and coefficients are recalled from Perrin &
+ * Hartmann 1989, JQSRT 42, 311, and must be checked against the paper before any result depends
+ * on them quantitatively. They were derived for CO2–N2 in the 4.3 µm band wing (≈193 K to above
+ * room temperature); applying them to air broadening and to the 15 µm band is an approximation
+ * (the real χ depends on the band and is asymmetric about the line centre: Appl. Opt. 30, 281,
+ * 1991, for the low-wavenumber wing of ν₃).
  */
 import { assertFiniteInRange } from '../errors'
 import type { LineWingWeight } from './line-wing-weight'
 
-/** Break points σ₁, σ₂, σ₃ of χ, cm⁻¹ (Perrin & Hartmann 1989; REFERENCES §3e, MEMORY-low). */
+/**
+ * Break points σ₁, σ₂, σ₃ of χ, cm⁻¹ (Perrin & Hartmann 1989, JQSRT 42, 311; from memory, low
+ * confidence).
+ */
 export const CO2_CHI_BREAKPOINTS_CM = { sigma1: 3, sigma2: 30, sigma3: 120 } as const
 
 /**
@@ -41,9 +45,9 @@ export interface Co2ChiCoefficients {
  *
  * Method: B₁ = 0.0888 − 0.16 e^{−0.0041 T}, B₂ = 0.0526 e^{−0.00152 T}, B₃ = 0.0232.
  * Notes: at 296 K: B₁ = 0.04126, B₂ = 0.03354, B₃ = 0.0232. Accepts 150–800 K (B₁ > 0 there).
- * MEMORY-low coefficients. Units: (cm⁻¹)⁻¹.
- * Source: Perrin & Hartmann 1989, JQSRT 42, 311 (form and coefficients as REFERENCES §3e,
- * MEMORY-low).
+ * Coefficients from memory, low confidence. Units: (cm⁻¹)⁻¹.
+ * Source: Perrin & Hartmann 1989, JQSRT 42, 311 (form and coefficients from memory, low
+ * confidence).
  * @param temperatureK T, K
  */
 export function co2ChiCoefficients(temperatureK: number): Co2ChiCoefficients {
@@ -79,9 +83,9 @@ function chiWithCoefficients(detuningCm: number, c: Co2ChiCoefficients): number 
  * Notes: multiplies the Lorentz (Voigt) profile of each CO2 line beyond 3 cm⁻¹ from its centre;
  * χ(30 cm⁻¹, 296 K) = 0.33, χ(120 cm⁻¹, 296 K) = 0.016. Weakens the far wings that make the
  * 8–12 µm window absorption of CO2; the band-integrated absorption of optically thick bands changes
- * little. MEMORY-low coefficients (see the module comment). Accepts 150–800 K; any finite Δν.
- * Dimensionless, in (0, 1].
- * Source: Perrin & Hartmann 1989, JQSRT 42, 311 (REFERENCES §3e, MEMORY-low); sub-Lorentzian CO2
+ * little. Coefficients from memory, low confidence (see the module comment). Accepts 150–800 K; any
+ * finite Δν. Dimensionless, in (0, 1].
+ * Source: Perrin & Hartmann 1989, JQSRT 42, 311 (from memory, low confidence); sub-Lorentzian CO2
  * wings first measured by Burch, Gryvnak, Patty & Bartky 1969, J. Opt. Soc. Am. 59, 267.
  * @param detuningCm ν − ν*, cm⁻¹
  * @param temperatureK T, K

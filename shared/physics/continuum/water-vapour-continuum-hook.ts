@@ -11,7 +11,7 @@ import { addWaterContinuumOpticalDepth, type WaterContinuumParts } from './water
  * (`addWaterContinuumOpticalDepth`), self and/or foreign part as chosen.
  * Notes: pure (reads only its arguments), deterministic, no allocation per call. Non-zero only on
  * 650–1300 cm⁻¹ (full strength on 700–1250 cm⁻¹, tapered at the edges). Units: τ dimensionless.
- * Source: Roberts, Selby & Biberman 1976, Appl. Opt. 15, 2085 (REFERENCES §5, MEMORY).
+ * Source: Roberts, Selby & Biberman 1976, Appl. Opt. 15, 2085 (coefficients from memory).
  * @param parts self and/or foreign (default both)
  */
 export function createWaterVapourContinuumHook(parts: WaterContinuumParts = {}): ContinuumHook {

@@ -24,8 +24,9 @@ import { PhysicsError, assertFiniteInRange } from '../errors'
 import type { AtmosphereLayer } from '../types'
 
 /**
- * Coefficients of the Roberts form (MEMORY: the formula is widely reproduced; values as in
- * REFERENCES §5). Source: Roberts, Selby & Biberman 1976, Appl. Opt. 15(9), 2085–2090.
+ * Coefficients of the Roberts form (from memory: the formula is widely reproduced; check the
+ * units convention against the paper). Source: Roberts, Selby & Biberman 1976, Appl. Opt. 15(9),
+ * 2085–2090.
  */
 export const ROBERTS_WATER_CONTINUUM = {
   /** Constant part a of C_s(ν, 296 K), cm² molecule⁻¹ atm⁻¹. */
@@ -67,8 +68,7 @@ export interface WaterContinuumParts {
  * Notes: the published form, evaluated for any ν ≥ 0 (no range handling: see
  * `waterContinuumWindowWeight`). Values: 4.33e-22 (800 cm⁻¹), 1.89e-22 (1000), 1.38e-22 (1200).
  * Units: ν in cm⁻¹; result in cm² molecule⁻¹ atm⁻¹.
- * Source: Roberts, Selby & Biberman 1976, Appl. Opt. 15, 2085 (coefficients as REFERENCES §5,
- * MEMORY).
+ * Source: Roberts, Selby & Biberman 1976, Appl. Opt. 15, 2085 (coefficients from memory).
  * @param wavenumberCm ν, cm⁻¹ (finite, ≥ 0)
  */
 export function waterContinuumCoefficient296Cm2PerMoleculeAtm(wavenumberCm: number): number {
@@ -83,9 +83,9 @@ export function waterContinuumCoefficient296Cm2PerMoleculeAtm(wavenumberCm: numb
  * Method: f(T) = exp[T₀ (1/T − 1/296)], T₀ = 1800 K.
  * Notes: strong negative temperature dependence (f(260 K) = 2.32). The published form applies it
  * to C_s and therefore to both the self and the foreign term; measurements show a much weaker
- * temperature dependence of the foreign part (REFERENCES §5, MEMORY), which this form ignores.
+ * temperature dependence of the foreign part (from memory), which this form ignores.
  * Accepts 100–500 K; outside roughly 260–430 K it is an extrapolation. Dimensionless.
- * Source: Roberts, Selby & Biberman 1976, Appl. Opt. 15, 2085 (REFERENCES §5, MEMORY).
+ * Source: Roberts, Selby & Biberman 1976, Appl. Opt. 15, 2085 (coefficients from memory).
  * @param temperatureK T, K
  */
 export function waterContinuumTemperatureFactor(temperatureK: number): number {
@@ -101,7 +101,7 @@ export function waterContinuumTemperatureFactor(temperatureK: number): number {
  * Method: C_s(ν, T) = [a + b·exp(−βν)] · exp[T₀ (1/T − 1/296)]
  * (`waterContinuumCoefficient296Cm2PerMoleculeAtm` × `waterContinuumTemperatureFactor`).
  * Notes: no range handling in ν; T in 100–500 K. Units: cm² molecule⁻¹ atm⁻¹.
- * Source: Roberts, Selby & Biberman 1976, Appl. Opt. 15, 2085 (REFERENCES §5, MEMORY).
+ * Source: Roberts, Selby & Biberman 1976, Appl. Opt. 15, 2085 (coefficients from memory).
  * @param wavenumberCm ν, cm⁻¹ (≥ 0)
  * @param temperatureK T, K
  */
@@ -142,7 +142,7 @@ export function waterContinuumWindowWeight(wavenumberCm: number): number {
  *
  * Method: self: e; foreign: γ(P − e), γ = 0.002.
  * Notes: requires 0 ≤ e ≤ P. Units: atm.
- * Source: Roberts, Selby & Biberman 1976, Appl. Opt. 15, 2085 (REFERENCES §5, MEMORY).
+ * Source: Roberts, Selby & Biberman 1976, Appl. Opt. 15, 2085 (coefficients from memory).
  * @param waterPressureAtm water partial pressure e, atm
  * @param totalPressureAtm total pressure P, atm
  * @param parts self and/or foreign (default both)
@@ -183,11 +183,11 @@ export interface WaterContinuumPath {
  * (`waterContinuumWindowWeight`), C_s from `waterContinuumCoefficientCm2PerMoleculeAtm` and the
  * pressure term from `waterContinuumPressureTermAtm` (self and/or foreign).
  * Notes: equals k·L of the published absorption coefficient for a path of length L with
- * N_w = n_w L. Worked example (REFERENCES §5, COMPUTED there from the same formula): 1 km at
+ * N_w = n_w L. Worked example (computed by hand from the same formula): 1 km at
  * 296 K, e = 20 hPa, P = 1013.25 hPa gives τ(1000 cm⁻¹) ≈ 0.20. Accuracy: that of the 1976
- * parameterisation (MEMORY coefficients; the modern self continuum near 1000 cm⁻¹ differs by tens
- * of percent). Units: ν in cm⁻¹; τ dimensionless.
- * Source: Roberts, Selby & Biberman 1976, Appl. Opt. 15, 2085 (REFERENCES §5, MEMORY).
+ * parameterisation (coefficients from memory; the modern self continuum near 1000 cm⁻¹ differs by
+ * tens of percent). Units: ν in cm⁻¹; τ dimensionless.
+ * Source: Roberts, Selby & Biberman 1976, Appl. Opt. 15, 2085 (coefficients from memory).
  * @param wavenumberCm ν, cm⁻¹ (≥ 0)
  * @param path temperature, water column and pressures
  * @param parts self and/or foreign (default both)
@@ -251,7 +251,7 @@ export function waterContinuumPathOfLayer(layer: AtmosphereLayer): WaterContinuu
  * per point, factored); points with w = 0 are skipped, no allocation.
  * Notes: a layer without water (zero or absent column, or zero mixing ratio with the foreign part
  * off) adds nothing and does not check its temperature. Units: ν in cm⁻¹; τ dimensionless.
- * Source: Roberts, Selby & Biberman 1976, Appl. Opt. 15, 2085 (REFERENCES §5, MEMORY).
+ * Source: Roberts, Selby & Biberman 1976, Appl. Opt. 15, 2085 (coefficients from memory).
  * @param wavenumberCm grid, cm⁻¹ (finite, ≥ 0)
  * @param layer the layer (mean T, mean P, water column and mixing ratio)
  * @param out optical depth to add to, same length as the grid

@@ -5,9 +5,9 @@
  * coefficients are uncertain by tens of percent and atomic oxygen (which dominates above ~85 km)
  * is only included when its density is supplied.
  * Sources: López-Puertas & Taylor 2001, Non-LTE Radiative Transfer in the Atmosphere, ch. 6
- * (k_VT fit based on Siddles, Wilson & Simpson 1994, Chem. Phys.; MEMORY-low); Castle et al.
- * 2006, JGR 111, A09303 (k for CO₂(ν₂) + O, 1.8 × 10⁻¹² cm³ s⁻¹); Einstein A ≈ 1.5 s⁻¹ computed
- * from the band intensity ≈7.9 × 10⁻¹⁸ cm molecule⁻¹ (from memory).
+ * (k_VT fit based on Siddles, Wilson & Simpson 1994, Chem. Phys.; from memory, low confidence);
+ * Castle et al. 2006, JGR 111, A09303 (k for CO₂(ν₂) + O, 1.8 × 10⁻¹² cm³ s⁻¹); Einstein
+ * A ≈ 1.5 s⁻¹ computed from the band intensity ≈7.9 × 10⁻¹⁸ cm molecule⁻¹ (from memory).
  */
 import { BOLTZMANN_J_PER_K } from '../constants'
 import { PhysicsError } from '../errors'
@@ -23,8 +23,9 @@ export const CO2_BENDING_ATOMIC_OXYGEN_RATE_CM3_PER_S = 1.8e-12
  * Vibrational–translational de-excitation rate coefficient of CO₂(01101) by N₂ and O₂.
  *
  * Method: k_VT(T) = 7 × 10⁻¹⁷ √T + 6.7 × 10⁻¹⁰ exp(−83.8 T^{−1/3}) cm³ s⁻¹.
- * Notes: MEMORY-low fit from the non-LTE literature; ≈3.5 × 10⁻¹⁵ at 295 K, ≈1.4 × 10⁻¹⁵ at
- * 200 K; room-temperature measurements (3–6) × 10⁻¹⁵. Use as an order of magnitude only.
+ * Notes: fit from the non-LTE literature (from memory, low confidence); ≈3.5 × 10⁻¹⁵ at 295 K,
+ * ≈1.4 × 10⁻¹⁵ at 200 K; room-temperature measurements (3–6) × 10⁻¹⁵. Use as an order of
+ * magnitude only.
  * Source: López-Puertas & Taylor 2001, ch. 6, after Siddles, Wilson & Simpson 1994 (from memory).
  *
  * @param temperatureK kinetic temperature, K, in (0, 1000]
@@ -67,9 +68,9 @@ export interface LteCheckResult {
  *
  * Method: n = p/(k_B T) (ideal gas, converted to cm⁻³); rate = k_VT(T)·n [+ k_O·n_O];
  * ratio = rate/A; flag where ratio < threshold (10 by default).
- * Notes: order of magnitude only (MEMORY-low rate coefficients). Ratio ≈ 6 × 10⁴ at 1000 hPa,
- * 295 K; with a US76-like profile it falls below 10 in the upper mesosphere (around 55–65 km
- * with this fit) and below 1 near 73 km.
+ * Notes: order of magnitude only (rate coefficients from memory, low confidence). Ratio ≈ 6 × 10⁴
+ * at 1000 hPa, 295 K; with a US76-like profile it falls below 10 in the upper mesosphere (around
+ * 55–65 km with this fit) and below 1 near 73 km.
  * Source: López-Puertas & Taylor 2001, ch. 6 (from memory); see module note.
  *
  * @param levelPressurePa pressure per level, Pa (> 0)

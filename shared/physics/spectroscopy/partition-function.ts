@@ -49,8 +49,8 @@ export function vibrationalPartitionFunction(
  * Method: Q(T) = Q(296) · (T/296)^j · Q_vib(T)/Q_vib(296), j = 1 for linear and 1.5 for nonlinear
  * molecules (classical rigid-rotor limit), Q_vib the level sum of `vibrationalPartitionFunction`.
  * Notes: exact at 296 K by construction. An approximation: it ignores the quantum correction to
- * the rotational sum (≈ +1/3 for a linear rotor, 0.1 % of Q for CO2 at 220 K), centrifugal
- * distortion and rotation–vibration coupling; expected error ≲ 1 % for 150–350 K (estimate, not
+ * the rotational sum (≈ +1/(3σ) for a linear rotor of symmetry number σ, 0.1 % of Q for CO2 at
+ * 220 K), centrifugal distortion and rotation–vibration coupling; expected error ≲ 1 % for 150–350 K (estimate, not
  * measured against level sums). Accepts 50–1000 K. Dimensionless.
  * Source: high-temperature rotational partition functions, Herzberg 1945 ch. V and Herzberg 1950
  * (Spectra of Diatomic Molecules) ch. III (from memory); Q(296) from the isotopologue table.

@@ -13,7 +13,7 @@ describe('createBuiltInPartitionFunctionLookup', () => {
 
   it('when asked for each catalogue isotopologue at 296 K, returns the published Q(296)', () => {
     // Published Q(296): isotopologue table of the public spectroscopic database, Gordon et al.
-    // 2022, JQSRT 277, 107949 (REFERENCES §3a and §4, VERIFIED). Tolerances: the level sums of the
+    // 2022, JQSRT 277, 107949. Tolerances: the level sums of the
     // linear molecules, H2O and CH4 reproduce them to 1e-4; O3 (Watson levels of (000) only, rigid
     // product with Q_vib) to 0.5 % (measured −0.40 %).
     const published: [number, number, number, number, string][] = [

@@ -94,8 +94,9 @@ describe('buildBuiltInCatalogue', () => {
   })
 
   it('when the H2O pure-rotation band is summed, is within 3 % of the rigid-rotor sum rule', () => {
-    // ΣS = (8π³/3hc)μ²(A + C) = 5.32e-17 cm/molecule (REFERENCES §4, COMPUTED; "real value a few %
-    // different because of centrifugal distortion"): 3 %.
+    // ΣS = (8π³/3hc)μ²(A + C) = 5.32e-17 cm/molecule (computed by hand from μ = 1.8546 D, Clough
+    // et al. 1973, J. Chem. Phys. 59, 2254, from memory; the real value differs by a few % because
+    // of centrifugal distortion): 3 %.
     const band = catalogue.bands.find((b) => b.id === 'h2o-161-rotation')!
     expect(band.publishedBandIntensityCmPerMolecule).toBeNull()
     expectRelativeClose(band.intensitySumCmPerMolecule, 5.32e-17, 0.03)

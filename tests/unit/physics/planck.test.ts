@@ -56,8 +56,9 @@ function compositeQuadrature(
 }
 
 describe('planckRadianceWavenumber', () => {
-  // REFERENCES.md §1 (COMPUTED from CODATA constants), 6 significant digits as tabulated;
-  // the 17-digit values were computed with mpmath 1.2.1 (dps = 40) for this test.
+  // Planck function computed with the CODATA 2018 constants (Tiesinga et al. 2021, Rev. Mod. Phys.
+  // 93, 025010), 6 significant digits; the 17-digit values were computed with mpmath 1.2.1 (dps =
+  // 40) for this test.
   const table: Array<[number, number, number]> = [
     [667, 288, 0.13090551247934209], // §1: 0.130 906
     [667, 220, 0.045649725744757078], // §1: 0.045 650
@@ -68,14 +69,14 @@ describe('planckRadianceWavenumber', () => {
     [50000, 200, 9.112190624226024e-151], // mpmath: deep Wien side (x ≈ 360)
   ]
 
-  it('when given the REFERENCES §1 wavenumbers and temperatures, returns the mpmath values to 1e-13', () => {
+  it('when given the check wavenumbers and temperatures, returns the mpmath values to 1e-13', () => {
     for (const [nu, t, expected] of table)
       expectRelClose(planckRadianceWavenumber(nu, t), expected, 1e-13, `B(${nu}, ${t})`)
   })
 
-  it('when given B(667 cm⁻¹, 288 K), returns 0.130 906 to the 6 digits printed in REFERENCES §1', () => {
-    expect(planckRadianceWavenumber(667, 288)).toBeCloseTo(0.130906, 6) // REFERENCES.md §1 COMPUTED
-    expect(Math.PI * planckRadianceWavenumber(667, 288)).toBeCloseTo(0.41125, 5) // §1: πB = 0.411 25
+  it('when given B(667 cm⁻¹, 288 K), returns 0.130 906 to 6 digits', () => {
+    expect(planckRadianceWavenumber(667, 288)).toBeCloseTo(0.130906, 6) // computed (CODATA 2018)
+    expect(Math.PI * planckRadianceWavenumber(667, 288)).toBeCloseTo(0.41125, 5) // πB, computed
   })
 
   it('when x = c₂ν̃/T is huge, returns 0 without NaN', () => {
@@ -193,13 +194,15 @@ describe('brightnessTemperatureK', () => {
 
 describe('wienPeakWavenumberCm', () => {
   it('when T = 1 K, returns 1.960 998 55 cm⁻¹', () => {
-    // REFERENCES.md §1 COMPUTED: x_ν/c₂ = 1.960 998 55 cm⁻¹ K⁻¹ (x_ν VERIFIED 2.821 439 372).
+    // x_ν/c₂ = 1.960 998 55 cm⁻¹ K⁻¹, computed with CODATA 2018 c₂; x_ν = 2.821 439 372 is the
+    // root of x = 3(1 − e^{−x}).
     expectRelClose(wienPeakWavenumberCm(1), 1.96099855, 5e-9)
     expectRelClose(WIEN_X_WAVENUMBER, 2.821439372, 1e-9)
   })
 
   it('when multiplied by k/h, reproduces the CODATA 2018 Wien frequency constant', () => {
-    // CODATA 2018 b′ = 5.878 925 757e10 Hz K⁻¹ (REFERENCES §1 VERIFIED); ν = c ν̃.
+    // CODATA 2018 b′ = 5.878 925 757e10 Hz K⁻¹ (Tiesinga et al. 2021, Rev. Mod. Phys. 93, 025010);
+    // ν = c ν̃.
     expectRelClose(wienPeakWavenumberCm(1) * 29979245800, 5.878925757e10, 1e-9)
   })
 
@@ -207,7 +210,7 @@ describe('wienPeakWavenumberCm', () => {
     // analytic property: dB/dν̃ = 0 at the peak; check B is lower on both sides.
     const t = 288
     const peak = wienPeakWavenumberCm(t)
-    expectRelClose(peak, 1.96099855 * 288, 5e-9) // REFERENCES §1
+    expectRelClose(peak, 1.96099855 * 288, 5e-9) // computed, as above
     const b0 = planckRadianceWavenumber(peak, t)
     expect(planckRadianceWavenumber(peak * (1 + 1e-4), t)).toBeLessThan(b0)
     expect(planckRadianceWavenumber(peak * (1 - 1e-4), t)).toBeLessThan(b0)
@@ -223,7 +226,7 @@ describe('planckBandIntegral', () => {
       const expected = (STEFAN_BOLTZMANN_W_PER_M2_K4 * t ** 4) / Math.PI
       expectRelClose(planckBandIntegral(0, Infinity, t), expected, 1e-9, `T=${t}`)
     }
-    // REFERENCES §1: σ·288⁴ = 390.11 W m⁻², σ·255⁴ = 239.76 W m⁻²
+    // σ·288⁴ = 390.11 W m⁻², σ·255⁴ = 239.76 W m⁻² (computed with the CODATA 2018 σ)
     expect(Math.PI * planckBandIntegral(0, Infinity, 288)).toBeCloseTo(390.11, 2)
     expect(Math.PI * planckBandIntegral(0, Infinity, 255)).toBeCloseTo(239.76, 2)
   })

@@ -16,7 +16,7 @@ function goodLevels(): AtmosphereLevel[] {
   ]
 }
 
-// REFERENCES.md §10, Murphy & Koop 2005 column (COMPUTED): e_w(20 °C) = 23.394 hPa,
+// Computed by hand from Murphy & Koop 2005, QJRMS 131, 1539: e_w(20 °C) = 23.394 hPa,
 // e_w(−20 °C) = 1.2550 hPa, e_i(−20 °C) = 1.0325 hPa.
 const E_WATER_20C_PA = 2339.4
 const E_WATER_MINUS20C_PA = 125.5
@@ -114,7 +114,8 @@ describe('checkLevels', () => {
   })
 
   it('when 95 % over water at −20 °C is checked over ice, returns an error of 115.5 % over ice', () => {
-    // RH_ice = 0.95 × e_w/e_i = 0.95 × 1.2550/1.0325 = 1.1547 (REFERENCES.md §10 values).
+    // RH_ice = 0.95 × e_w/e_i = 0.95 × 1.2550/1.0325 = 1.1547 (Murphy & Koop values
+    // above).
     const levels = goodLevels()
     levels[2].temperatureK = 253.15
     levels[2].vmr.H2O = (0.95 * E_WATER_MINUS20C_PA) / 50000
@@ -206,14 +207,14 @@ describe('checkLevels', () => {
 
 describe('levelRelativeHumidity', () => {
   it('when x p equals e_w(20 °C) = 23.394 hPa, returns RH = 1 over water', () => {
-    // REFERENCES.md §10 Murphy & Koop value (5 digits: 2e-5 relative).
+    // Murphy & Koop 2005 value, computed by hand (5 digits: 2e-5 relative).
     const rh = levelRelativeHumidity(E_WATER_20C_PA / 100000, 293.15, 100000)
     expect(rh?.over).toBe('water')
     expect(Math.abs((rh?.relativeHumidity ?? 0) - 1)).toBeLessThan(3e-5)
   })
 
   it('when x p equals e_i(−20 °C) = 1.0325 hPa over ice, returns RH = 1 over ice', () => {
-    // REFERENCES.md §10 Murphy & Koop ice value (5 digits: 5e-5 relative).
+    // Murphy & Koop 2005 ice value, computed by hand (5 digits: 5e-5 relative).
     const rh = levelRelativeHumidity(E_ICE_MINUS20C_PA / 50000, 253.15, 50000, 'ice-below-freezing')
     expect(rh?.over).toBe('ice')
     expect(Math.abs((rh?.relativeHumidity ?? 0) - 1)).toBeLessThan(6e-5)

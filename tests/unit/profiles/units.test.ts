@@ -96,8 +96,9 @@ describe('toSi / fromSi', () => {
 
 describe('mixingRatioFromDewPoint / dewPointFromMixingRatioK', () => {
   it('when T_d = 10 °C and p = 1000 hPa with Bolton e_s, returns r = 7.73 g/kg', () => {
-    // REFERENCES.md §10 worked value (COMPUTED with Bolton 1980 e_s and ε = 0.622):
-    // e = 12.272 hPa, r = 7.73 g/kg. Here ε = M_w/M_d = 0.62198; the difference is 3e-5 relative.
+    // Worked value (computed by hand with Bolton 1980, Mon. Wea. Rev. 108, 1046, e_s and ε =
+    // 0.622): e = 12.272 hPa, r = 7.73 g/kg. Here ε = M_w/M_d = 0.62198; the difference is 3e-5
+    // relative.
     expectToPrintedDigits(
       mixingRatioFromDewPoint(283.15, 100000, 'bolton') * 1000,
       7.73,
@@ -107,7 +108,7 @@ describe('mixingRatioFromDewPoint / dewPointFromMixingRatioK', () => {
   })
 
   it('when T_d = 20 °C and p = 1013.25 hPa with Bolton e_s, returns r = 14.68 g/kg', () => {
-    // REFERENCES.md §10 worked value (COMPUTED with Bolton e_s): r = 14.68 g/kg.
+    // Worked value (computed by hand with Bolton 1980 e_s): r = 14.68 g/kg.
     expectToPrintedDigits(
       mixingRatioFromDewPoint(293.15, 101325, 'bolton') * 1000,
       14.68,
@@ -117,13 +118,13 @@ describe('mixingRatioFromDewPoint / dewPointFromMixingRatioK', () => {
   })
 
   it('when T_d = 20 °C and p = 1013.25 hPa with Murphy–Koop e_s, returns r = 14.70 g/kg', () => {
-    // REFERENCES.md §10: Murphy & Koop e_w(20 °C) = 23.394 hPa (COMPUTED); by hand
+    // Murphy & Koop 2005, QJRMS 131, 1539: e_w(20 °C) = 23.394 hPa (computed by hand); by hand
     // r = 0.62198 × 23.394/(1013.25 − 23.394) = 14.6997 g/kg (Wallace & Hobbs 2006 ch. 3 formula).
     expectToPrintedDigits(mixingRatioFromDewPoint(293.15, 101325) * 1000, 14.6997, 0.0005, 'r')
   })
 
   it('when given r = 7.73 g/kg at 1000 hPa with Bolton, returns a dew point of 10.00 °C', () => {
-    // inverse of the REFERENCES.md §10 worked value; 7.73 is rounded from 7.7276, which moves
+    // inverse of the Bolton worked value above; 7.73 is rounded from 7.7276, which moves
     // T_d by ≈ 0.004 K (de/dT ≈ 0.82 hPa/K at 10 °C), so 0.01 K is allowed.
     expectToPrintedDigits(
       dewPointFromMixingRatioK(7.73e-3, 100000, 'bolton') - 273.15,
@@ -140,14 +141,14 @@ describe('mixingRatioFromDewPoint / dewPointFromMixingRatioK', () => {
 
 describe('waterVmrFromHumidity / humidityFromWaterVmr', () => {
   it('when given 80 % RH at 20 °C and 1013 hPa, returns 0.8 × 23.394 hPa / p', () => {
-    // REFERENCES.md §10: Murphy & Koop e_w(20 °C) = 23.394 hPa (5 digits: 2e-5 relative);
-    // x = RH e_s/p (WMO-No. 8 definition of RH; Dalton's law).
+    // Murphy & Koop 2005, QJRMS 131, 1539: e_w(20 °C) = 23.394 hPa (computed by hand; 5 digits:
+    // 2e-5 relative); x = RH e_s/p (WMO-No. 8 definition of RH; Dalton's law).
     const vmr = waterVmrFromHumidity('relativeHumidity', 0.8, 293.15, 101300)
     expectRelClose(vmr, (0.8 * 2339.4) / 101300, 3e-5, 'x')
   })
 
   it('when given a dew point of 0 °C at 850 hPa, returns 6.1121 hPa / 850 hPa', () => {
-    // REFERENCES.md §10: Murphy & Koop e_w(0 °C) = 6.1121 hPa.
+    // Murphy & Koop 2005, QJRMS 131, 1539: e_w(0 °C) = 6.1121 hPa (computed by hand).
     expectRelClose(waterVmrFromHumidity('dewPoint', 273.15, 273.15, 85000), 6.1121 / 850, 1e-5)
   })
 

@@ -59,10 +59,10 @@ export const METHANE_NU4: SphericalTopBand = {
     nAirMin: 0.6,
     pressureShiftCmPerAtm: -0.005,
     source:
-      'Representative CH4–air values at 296 K (γ_air ≈ 0.064 at low J falling to ≈0.045 at J ≈ 15, γ_self ≈ 1.25 γ_air, n_air ≈ 0.75–0.6, shifts ≈ −0.005 cm⁻¹ atm⁻¹): MEMORY-low.',
+      'Representative CH4–air values at 296 K (γ_air ≈ 0.064 at low J falling to ≈0.045 at J ≈ 15, γ_self ≈ 1.25 γ_air, n_air ≈ 0.75–0.6, shifts ≈ −0.005 cm⁻¹ atm⁻¹): from memory, low confidence.',
     confidence: 'MEMORY-low',
   },
   source:
-    'ν₄ origin 1310.761 cm⁻¹ and B₀ = 5.2410 cm⁻¹ (REFERENCES §4, MEMORY-low); D₀ ≈ 1.11e-4 cm⁻¹ (MEMORY); ζ₄ = 0.46 from the XY₄ sum rule ζ₃ + ζ₄ = ½ with ζ₃ ≈ 0.04 (Herzberg 1945, Infrared and Raman Spectra, ch. IV; from memory, MEMORY-low); B′ = B₀ and D′ = D₀ (no vibration–rotation α, an approximation); band intensity 5.5e-18 cm molecule⁻¹, the middle of the 5.3–5.7e-18 range of REFERENCES §4 (MEMORY-low). With these the Q branch falls at ν₀ − 2B′ζ = 1305.94 cm⁻¹, matching the observed Q-branch peak ≈1306 (REFERENCES §4).',
+    'ν₄ origin 1310.761 cm⁻¹ and B₀ = 5.2410 cm⁻¹ (from memory, low confidence); D₀ ≈ 1.11e-4 cm⁻¹ (from memory); ζ₄ = 0.46 from the XY₄ sum rule ζ₃ + ζ₄ = ½ with ζ₃ ≈ 0.04 (Herzberg 1945, Infrared and Raman Spectra, ch. IV; from memory, low confidence); B′ = B₀ and D′ = D₀ (no vibration–rotation α, an approximation); band intensity 5.5e-18 cm molecule⁻¹, the middle of a recalled 5.3–5.7e-18 range (from memory, low confidence). With these the Q branch falls at ν₀ − 2B′ζ = 1305.94 cm⁻¹, matching the observed Q-branch peak ≈1306 (from memory).',
   confidence: 'MEMORY-low',
 }

@@ -29,7 +29,7 @@ export const OZONE_STATES: readonly AsymmetricTopState[] = [
     constants: { A: 3.553664, B: 0.4452817, C: 0.3947506, ...OZONE_GROUND_DISTORTION },
     spinWeights: { evenKaPlusKc: 1, oddKaPlusKc: 0 },
     source:
-      'A, B, C: REFERENCES §4 (3.5537, 0.4453, 0.3948, MEMORY) with extra digits after Flaud et al. 1990 ozone ground-state fits (from memory); quartic constants MEMORY-low (magnitudes: Δ_K ≈ 3.5 MHz, Δ_J ≈ 0.011 MHz).',
+      'A, B, C: 3.5537, 0.4453, 0.3948 (from memory) with extra digits after Flaud et al. 1990 ozone ground-state fits (from memory); quartic constants from memory, low confidence (magnitudes: Δ_K ≈ 3.5 MHz, Δ_J ≈ 0.011 MHz).',
     confidence: 'MEMORY',
   },
   {
@@ -38,7 +38,7 @@ export const OZONE_STATES: readonly AsymmetricTopState[] = [
     constants: { A: 3.50144, B: 0.441245, C: 0.391508, ...OZONE_GROUND_DISTORTION },
     spinWeights: { evenKaPlusKc: 0, oddKaPlusKc: 1 },
     source:
-      'ν₃ = 1042.084 cm⁻¹ (REFERENCES §4 and the isotopologue table levels, MEMORY); rotational constants after Flaud, Camy-Peyret, Rinsland, Smith & Malathy Devi 1990, Atlas of ozone spectral parameters (from memory, MEMORY-low: A′−A″ ≈ −0.052, B′−B″ ≈ −0.004, C′−C″ ≈ −0.003); distortion set equal to the ground state.',
+      'ν₃ = 1042.084 cm⁻¹ (as in the vibrational levels of the isotopologue table, shared/physics/spectroscopy/isotopologues.ts; from memory); rotational constants after Flaud, Camy-Peyret, Rinsland, Smith & Malathy Devi 1990, Atlas of ozone spectral parameters (from memory, low confidence: A′−A″ ≈ −0.052, B′−B″ ≈ −0.004, C′−C″ ≈ −0.003); distortion set equal to the ground state.',
     confidence: 'MEMORY-low',
   },
   {
@@ -47,7 +47,7 @@ export const OZONE_STATES: readonly AsymmetricTopState[] = [
     constants: { A: 3.53553, B: 0.44298, C: 0.39205, ...OZONE_GROUND_DISTORTION },
     spinWeights: { evenKaPlusKc: 1, oddKaPlusKc: 0 },
     source:
-      'ν₁ = 1103.137 cm⁻¹ (isotopologue table levels; REFERENCES §4 gives 1103.14, MEMORY); rotational constants MEMORY-low estimates (α_A ≈ 0.018, α_B ≈ 0.0023, α_C ≈ 0.0027); distortion set equal to the ground state.',
+      'ν₁ = 1103.137 cm⁻¹ (isotopologue table levels; 1103.14 from memory); rotational constants: estimates from memory, low confidence (α_A ≈ 0.018, α_B ≈ 0.0023, α_C ≈ 0.0027); distortion set equal to the ground state.',
     confidence: 'MEMORY-low',
   },
 ]
@@ -63,7 +63,7 @@ const OZONE_BROADENING: BroadeningModel = {
   nAirMin: 0.6,
   pressureShiftCmPerAtm: -0.002,
   source:
-    'Representative values for O3 in air at 296 K (γ_air 0.06–0.08, γ_self ≈ 1.3 γ_air, n_air ≈ 0.75; shifts of a few 10⁻³ cm⁻¹ atm⁻¹): MEMORY-low, after the ozone line-parameter compilations of Flaud et al. and Smith et al. (from memory).',
+    'Representative values for O3 in air at 296 K (γ_air 0.06–0.08, γ_self ≈ 1.3 γ_air, n_air ≈ 0.75; shifts of a few 10⁻³ cm⁻¹ atm⁻¹): after the ozone line-parameter compilations of Flaud et al. and Smith et al. (from memory, low confidence).',
   confidence: 'MEMORY-low',
 }
 
@@ -82,7 +82,7 @@ export const OZONE_BANDS: readonly AsymmetricTopBand[] = [
     dipoleMomentDebye: null,
     broadening: OZONE_BROADENING,
     source:
-      'Band intensity ≈1.4e-17 cm molecule⁻¹ (≈350 cm⁻² atm⁻¹): Smith, Malathy Devi, Benner & Rinsland 2001, JGR 106, 9909 (paper VERIFIED, number MEMORY-low; REFERENCES §4).',
+      'Band intensity ≈1.4e-17 cm molecule⁻¹ (≈350 cm⁻² atm⁻¹): Smith, Malathy Devi, Benner & Rinsland 2001, JGR 106, 9909 (number from memory, low confidence).',
     confidence: 'MEMORY-low',
   },
   {
@@ -97,7 +97,8 @@ export const OZONE_BANDS: readonly AsymmetricTopBand[] = [
     bandIntensityCmPerMolecule: 5e-19,
     dipoleMomentDebye: null,
     broadening: OZONE_BROADENING,
-    source: 'Band intensity ≈5e-19 cm molecule⁻¹ (REFERENCES §4, MEMORY-low; about 1/28 of ν₃).',
+    source:
+      'Band intensity ≈5e-19 cm molecule⁻¹ (Smith, Malathy Devi, Benner & Rinsland 2001, JGR 106, 9909; from memory, low confidence; about 1/28 of ν₃).',
     confidence: 'MEMORY-low',
   },
 ]

@@ -1,9 +1,11 @@
 /**
  * Record types of the asymmetric-top and spherical-top constants tables (data only).
  *
- * Confidence tags follow /work/shared/REFERENCES.md: VERIFIED (seen in published text or in public
- * code reproducing it), COMPUTED (derived here from a formula), MEMORY (recalled, not checked
- * against the paper), MEMORY-low (unsure of a digit or more; a plausibility value).
+ * Confidence tags (the same scale as the linear-molecule tables, `../../constants/confidence.ts`):
+ * VERIFIED — checked against the published source named in `source`; COMPUTED — derived in this
+ * project from a stated formula and other tabulated values; MEMORY — recalled from the named
+ * source ("from memory"), not checked against it; MEMORY-low — recalled with low confidence
+ * (unsure of a digit or more), a plausibility value only.
  */
 
 /** How far a number can be trusted. */

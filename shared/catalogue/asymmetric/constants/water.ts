@@ -43,7 +43,7 @@ export const WATER_STATES: readonly AsymmetricTopState[] = [
     },
     spinWeights: WATER_SPIN_WEIGHTS,
     source:
-      'Ground-state A-reduced constants (MHz) of the microwave/submillimetre fits of De Lucia, Helminger & Kirchhoff 1974, J. Phys. Chem. Ref. Data 3, 211, and Kyrö 1981, J. Mol. Spectrosc. 88, 167 (from memory; which digit comes from which paper is uncertain). A, B, C agree with 27.88063, 14.52177, 9.27771 cm⁻¹ used in public partition-function code (VERIFIED there) to 1.4e-4 cm⁻¹. Quartic constants MEMORY; sextic H_JK, H_KJ, H_K, h_JK, h_K MEMORY-low (magnitudes only).',
+      'Ground-state A-reduced constants (MHz) of the microwave/submillimetre fits of De Lucia, Helminger & Kirchhoff 1974, J. Phys. Chem. Ref. Data 3, 211, and Kyrö 1981, J. Mol. Spectrosc. 88, 167 (from memory; which digit comes from which paper is uncertain). A, B, C agree with the widely used set 27.88063, 14.52177, 9.27771 cm⁻¹ (its published source not at hand) to 1.4e-4 cm⁻¹. Quartic constants from memory; sextic H_JK, H_KJ, H_K, h_JK, h_K from memory, low confidence (magnitudes only).',
     confidence: 'MEMORY',
   },
   {
@@ -62,7 +62,7 @@ export const WATER_STATES: readonly AsymmetricTopState[] = [
     },
     spinWeights: WATER_SPIN_WEIGHTS,
     source:
-      'ν₂ = 1594.746 cm⁻¹ (Tennyson et al. 2001, J. Phys. Chem. Ref. Data 30, 735; REFERENCES §4, MEMORY). (010) A-reduced constants after Camy-Peyret & Flaud 1976, Mol. Phys. 32, 523 (from memory, MEMORY-low; quartic and H_K only).',
+      'ν₂ = 1594.746 cm⁻¹ (Tennyson et al. 2001, J. Phys. Chem. Ref. Data 30, 735; from memory). (010) A-reduced constants after Camy-Peyret & Flaud 1976, Mol. Phys. 32, 523 (from memory, low confidence; quartic and H_K only).',
     confidence: 'MEMORY-low',
   },
 ]
@@ -81,7 +81,7 @@ const WATER_BROADENING: BroadeningModel = {
   nAirMin: 0.45,
   pressureShiftCmPerAtm: -0.005,
   source:
-    'Representative fit shape of the measured H2O broadening (γ_air range 0.01–0.11, mean ≈0.07; γ_self ≈ 5 γ_air; n_air ≈ 0.64–0.75: REFERENCES §4, MEMORY; J dependence after Gamache & Hartmann 2004 style smoothings, from memory). Shift: a typical −0.005 cm⁻¹ atm⁻¹ (MEMORY-low).',
+    'Representative fit shape of the measured H2O broadening (γ_air range 0.01–0.11, mean ≈0.07; γ_self ≈ 5 γ_air; n_air ≈ 0.64–0.75: from memory; J dependence after Gamache & Hartmann 2004 style smoothings, from memory). Shift: a typical −0.005 cm⁻¹ atm⁻¹ (from memory, low confidence).',
   confidence: 'MEMORY-low',
 }
 
@@ -100,7 +100,7 @@ export const WATER_BANDS: readonly AsymmetricTopBand[] = [
     dipoleMomentDebye: 1.8546,
     broadening: { ...WATER_BROADENING, pressureShiftCmPerAtm: 0 },
     source:
-      'Permanent dipole 1.8546 D along b: Clough, Beers, Klein & Rothman 1973, J. Chem. Phys. 59, 2254 (REFERENCES §4, MEMORY). Absolute intensities from the dipole; total compared with the rigid-rotor sum rule (8π³/3hc)μ²(A + C) = 5.32e-17 cm molecule⁻¹ (REFERENCES §4, COMPUTED).',
+      'Permanent dipole 1.8546 D along b: Clough, Beers, Klein & Rothman 1973, J. Chem. Phys. 59, 2254 (from memory). Absolute intensities from the dipole; total compared with the rigid-rotor sum rule (8π³/3hc)μ²(A + C) = 5.32e-17 cm molecule⁻¹ (computed here).',
     confidence: 'MEMORY',
   },
   {
@@ -116,7 +116,7 @@ export const WATER_BANDS: readonly AsymmetricTopBand[] = [
     dipoleMomentDebye: null,
     broadening: WATER_BROADENING,
     source:
-      'Band origin 1594.746 cm⁻¹ (REFERENCES §4, MEMORY); band intensity 1.05e-17 cm molecule⁻¹, the middle of the 1.0–1.1e-17 range of database band sums (REFERENCES §4, MEMORY-low). b-type: the ν₂ (A1) transition moment lies along the C2 (b) axis.',
+      'Band origin 1594.746 cm⁻¹ (Tennyson et al. 2001, J. Phys. Chem. Ref. Data 30, 735; from memory); band intensity 1.05e-17 cm molecule⁻¹, the middle of the 1.0–1.1e-17 range of band sums of the public spectroscopic database (Gordon et al. 2022, JQSRT 277, 107949; from memory, low confidence). b-type: the ν₂ (A1) transition moment lies along the C2 (b) axis.',
     confidence: 'MEMORY-low',
   },
 ]

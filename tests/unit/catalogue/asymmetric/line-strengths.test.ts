@@ -103,7 +103,8 @@ describe('rotationalLineStrength', () => {
 
   it('when the top is a prolate symmetric top (B = C), returns the parallel-band Hönl–London factors', () => {
     // a-type R branch J → J + 1, ΔK = 0: λ = ((J+1)² − K²)/(J+1); Q branch: K²(2J+1)/(J(J+1))
-    // (REFERENCES §3c, Δl = 0 factors with l → K, MEMORY). Tolerance 1e-10 relative.
+    // (Δl = 0 factors with l → K; Herzberg 1945, Infrared and Raman Spectra, ch. IV; from memory).
+    // Tolerance 1e-10 relative.
     const prolate = {
       A: 27.88,
       B: 10,

@@ -51,7 +51,7 @@ describe('generateMethaneLines', () => {
   const lines = generateMethaneLines()
 
   it('when summed, returns the ν₄ band intensity 5.5e-18 to 1e-12', () => {
-    // Table value (REFERENCES §4 range 5.3–5.7e-18, MEMORY-low); normalisation exact.
+    // Table value (recalled range 5.3–5.7e-18, from memory, low confidence); normalisation exact.
     expectRelativeClose(
       lines.reduce((s, l) => s + l.intensityCmPerMolecule, 0),
       5.5e-18,
@@ -60,8 +60,8 @@ describe('generateMethaneLines', () => {
   })
 
   it('when the Q branch is generated, lies at ν₀ − 2Bζ ≈ 1305.94 cm⁻¹ (observed peak ≈1306)', () => {
-    // ν₀ = 1310.761, B = 5.241, ζ₄ = 0.46 (constants table); REFERENCES §4: Q-branch peak ≈1306
-    // (MEMORY). Tolerance 1e-9 against the formula, 0.5 cm⁻¹ against the observed peak.
+    // ν₀ = 1310.761, B = 5.241, ζ₄ = 0.46 (constants table); observed Q-branch peak ≈1306
+    // (from memory). Tolerance 1e-9 against the formula, 0.5 cm⁻¹ against the observed peak.
     const q = lines.filter((l) => (l.lowerLocalQuanta ?? '').startsWith('Q'))
     const expected = METHANE_NU4.bandOriginCm - 2 * METHANE_NU4.upperBCm * METHANE_NU4.coriolisZeta
     for (const line of q) expectAbsoluteClose(line.wavenumberCm, expected, 1e-9)
@@ -98,7 +98,7 @@ describe('generateMethaneLines', () => {
 
 describe('createMethanePartitionFunction', () => {
   it('when evaluated at 296 K, returns the published Q(296) = 590.48 within 2 %', () => {
-    // Gordon et al. 2022, JQSRT 277, 107949 isotopologue table (REFERENCES §4, VERIFIED).
+    // Gordon et al. 2022, JQSRT 277, 107949 isotopologue table.
     // Measured −0.002 %.
     expectRelativeClose(createMethanePartitionFunction()(296), 590.48, 0.02)
   })

@@ -25,13 +25,13 @@ const quanta = (label: string | undefined): number[] => (label ?? '').split(' ')
 
 describe('generateOzoneLines (ν₃)', () => {
   it('when the ν₃ intensities are summed, return the band intensity 1.4e-17 to 1e-12', () => {
-    // Band intensity ≈1.4e-17 cm molecule⁻¹ (Smith et al. 2001, JGR 106, 9909; REFERENCES §4,
-    // MEMORY-low); the normalisation is exact.
+    // Band intensity ≈1.4e-17 cm molecule⁻¹ (Smith et al. 2001, JGR 106, 9909; from
+    // memory, low confidence); the normalisation is exact.
     expectRelativeClose(sum(nu3), 1.4e-17, 1e-12)
   })
 
   it('when the ν₃ lines are weighted by intensity, they cluster at the band origin with P and R branches', () => {
-    // Origin 1042.084 cm⁻¹ (REFERENCES §4, MEMORY). a-type band: ≥ 99 % of the intensity within
+    // Origin 1042.084 cm⁻¹ (from memory). a-type band: ≥ 99 % of the intensity within
     // 990–1080 cm⁻¹ (measured 99.7 %); P (ν < ν₀) and R (ν > ν₀) branches each 40–60 % (measured
     // 52.8 / 47.2 %); intensity-weighted mean within 5 cm⁻¹ of ν₀ (measured 1039.96, shifted
     // by A′ − A″ < 0).
@@ -46,8 +46,8 @@ describe('generateOzoneLines (ν₃)', () => {
   })
 
   it('when R(0) 1_01 ← 0_00 is generated, lies at ν₀ + B′ + C′ − 4Δ_J′', () => {
-    // Diagonal element of the A-reduced Hamiltonian for J = 1, K = 0 (Watson 1977; COMPUTED from the
-    // (001) constants of the table). Tolerance 1e-9 cm⁻¹.
+    // Diagonal element of the A-reduced Hamiltonian for J = 1, K = 0 (Watson 1977; computed here
+    // from the (001) constants of the table). Tolerance 1e-9 cm⁻¹.
     const upper = OZONE_STATES[1]
     const line = nu3.find((l) => l.lowerLocalQuanta === '0 0 0' && l.upperLocalQuanta === '1 0 1')
     const expected =
@@ -70,7 +70,7 @@ describe('generateOzoneLines (ν₃)', () => {
 
 describe('generateOzoneLines (ν₁ and contract)', () => {
   it('when the ν₁ intensities are summed, return the band intensity 5e-19 to 1e-12', () => {
-    // REFERENCES §4 (MEMORY-low).
+    // Smith, Malathy Devi, Benner & Rinsland 2001, JGR 106, 9909 (from memory, low confidence).
     expectRelativeClose(sum(nu1), 5e-19, 1e-12)
   })
 
@@ -92,7 +92,7 @@ describe('generateOzoneLines (ν₁ and contract)', () => {
 
 describe('createOzonePartitionFunction', () => {
   it('when evaluated at 296 K, returns the published Q(296) = 3483.71 within 2 %', () => {
-    // Gordon et al. 2022, JQSRT 277, 107949 isotopologue table (REFERENCES §4, VERIFIED).
+    // Gordon et al. 2022, JQSRT 277, 107949 isotopologue table.
     // Measured −0.40 %.
     expectRelativeClose(createOzonePartitionFunction()(296), 3483.71, 0.02)
   })

@@ -30,10 +30,11 @@ function findLine(set: SpectralLine[], upper: string, lower: string): SpectralLi
 }
 
 describe('generateWaterLines (pure rotation positions)', () => {
-  // Line frequencies: Recommendation ITU-R P.676 (Annex 1, Table 2, water-vapour lines), seen in
-  // public code reproducing the table (VERIFIED there); assignments J′_{Ka′Kc′} ← J″_{Ka″Kc″} from
-  // memory (each consistent with the IUPAC levels of watson-hamiltonian.test.ts). Tolerances are
-  // absolute in cm⁻¹ and set just above the measured error (in brackets), which grows with Ka.
+  // Line frequencies: Recommendation ITU-R P.676 (Annex 1, Table 2, water-vapour lines; values
+  // seen reproduced from the table, the standard itself not at hand); assignments J′_{Ka′Kc′} ←
+  // J″_{Ka″Kc″} from memory (each consistent with the IUPAC levels of watson-hamiltonian.test.ts).
+  // Tolerances are absolute in cm⁻¹ and set just above the measured error (in brackets), which
+  // grows with Ka.
   const reference: Array<[string, string, number, number, number]> = [
     // upper, lower, frequency GHz, measured error cm⁻¹, tolerance cm⁻¹
     ['6 1 6', '5 2 3', 22.23508, 0.004, 0.006],
@@ -63,7 +64,7 @@ describe('generateWaterLines (pure rotation positions)', () => {
   }
 
   it('when the 22.235 GHz line is generated, its error is below 0.006 cm⁻¹ (≈180 MHz)', () => {
-    // 22.23508 GHz (ITU-R P.676 Table 2; REFERENCES-style MEMORY value 0.741681 cm⁻¹). It is the
+    // 22.23508 GHz (ITU-R P.676 Table 2; 0.741681 cm⁻¹ from memory). It is the
     // difference of two levels near 447 cm⁻¹ and thus very sensitive to centrifugal distortion;
     // measured error +0.0040 cm⁻¹ (+120 MHz, 0.5 % of the line frequency).
     const line = findLine(rotation, '6 1 6', '5 2 3')
@@ -82,7 +83,8 @@ describe('generateWaterLines (pure rotation positions)', () => {
 describe('generateWaterLines (intensities)', () => {
   it('when the pure-rotation intensities are summed, return the rigid-rotor sum rule within 3 %', () => {
     // Σ S = I_a/Q_vib · (8π³/3hc) μ² (A + C) = 5.32e-17 cm molecule⁻¹ before the abundance and
-    // Q_vib factors (REFERENCES §4, COMPUTED). The generated sum lacks J > 20 and Ka > 8 and has
+    // Q_vib factors (computed here; μ = 1.8546 D, Clough et al. 1973, J. Chem. Phys. 59, 2254, from
+    // memory). The generated sum lacks J > 20 and Ka > 8 and has
     // centrifugal distortion: measured −1.5 %. Tolerance 3 %.
     const record = getIsotopologue(1, 1)
     const qVib = vibrationalPartitionFunction(record.vibrationalLevels, 296)
@@ -91,7 +93,8 @@ describe('generateWaterLines (intensities)', () => {
   })
 
   it('when the ν₂ intensities are summed, return the band intensity 1.05e-17 to 1e-12', () => {
-    // Band intensity of the constants table (REFERENCES §4, MEMORY-low); the normalisation is exact.
+    // Band intensity of the constants table (from memory, low confidence); the normalisation is
+    // exact.
     const total = nu2.reduce((sum, l) => sum + l.intensityCmPerMolecule, 0)
     expectRelativeClose(total, 1.05e-17, 1e-12)
   })
@@ -128,7 +131,8 @@ describe('generateWaterLines (ν₂ positions)', () => {
   it('when the lowest ν₂ lines are generated, lie within 0.02 cm⁻¹ of the measured positions', () => {
     // Measured ν₂ lines (from memory): 1_11←0_00 1634.967, 0_00←1_11 1557.610,
     // 1_10←1_01 1616.711, 1_01←2_12 1539.061, 2_12←1_01 1653.267 cm⁻¹. Measured errors −0.003,
-    // −0.001, −0.015, −0.009, −0.004 cm⁻¹ ((010) constants MEMORY-low). Tolerance 0.02 cm⁻¹.
+    // −0.001, −0.015, −0.009, −0.004 cm⁻¹ ((010) constants from memory, low confidence). Tolerance
+    // 0.02 cm⁻¹.
     const reference: Array<[string, string, number]> = [
       ['1 1 1', '0 0 0', 1634.967],
       ['0 0 0', '1 1 1', 1557.61],
@@ -156,7 +160,7 @@ describe('generateWaterLines (determinism and options)', () => {
 
 describe('createWaterPartitionFunction', () => {
   it('when evaluated at 296 K, returns the published Q(296) = 174.58 within 2 %', () => {
-    // Gordon et al. 2022, JQSRT 277, 107949 isotopologue table (REFERENCES §4, VERIFIED).
+    // Gordon et al. 2022, JQSRT 277, 107949 isotopologue table.
     // Measured +0.002 %.
     expectRelativeClose(createWaterPartitionFunction()(296), 174.58, 0.02)
   })

@@ -10,7 +10,7 @@ import type { WatsonConstantsCm } from '../../../../shared/catalogue/asymmetric/
 import { WATER_STATES } from '../../../../shared/catalogue/asymmetric/constants/water'
 import { expectAbsoluteClose } from '../../../support/expect-close'
 
-/** Rigid rotor with the water ground-state A, B, C of REFERENCES §4 (MEMORY). */
+/** Rigid rotor with the water ground-state A, B, C (De Lucia et al. 1974; from memory). */
 const RIGID: WatsonConstantsCm = {
   A: 27.8806,
   B: 14.5218,

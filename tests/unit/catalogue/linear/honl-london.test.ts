@@ -4,7 +4,7 @@ import { honlLondonFactor } from '../../../../shared/catalogue/linear/honl-londo
 import { expectRelativeClose } from '../../../support/expect-close'
 
 describe('honlLondonFactor', () => {
-  it('when summed over P, Q and R, returns 2J″+1 for every l″ and Δl (sum rule, REFERENCES §3c)', () => {
+  it('when summed over P, Q and R, returns 2J″+1 for every l″ and Δl (sum rule)', () => {
     for (let lowerL = 0; lowerL <= 3; lowerL++) {
       for (const deltaL of [-1, 0, 1]) {
         if (deltaL === -1 && lowerL === 0) continue
@@ -13,22 +13,23 @@ describe('honlLondonFactor', () => {
             honlLondonFactor(-1, j, lowerL, deltaL) +
             honlLondonFactor(0, j, lowerL, deltaL) +
             honlLondonFactor(1, j, lowerL, deltaL)
-          // Sum rule of the Hönl–London factors: REFERENCES §3c (from memory), exact algebra.
+          // Sum rule of the Hönl–London factors (Herzberg 1945, Infrared and Raman Spectra, ch. IV;
+          // from memory), exact algebra.
           expectRelativeClose(sum, 2 * j + 1, 1e-13, `l″=${lowerL} Δl=${deltaL} J=${j}`)
         }
       }
     }
   })
 
-  it('when the lower level is Σ and Δl = +1, returns (J+2)/2, (2J+1)/2, (J−1)/2 (REFERENCES §3c)', () => {
+  it('when the lower level is Σ and Δl = +1, returns (J+2)/2, (2J+1)/2, (J−1)/2', () => {
     const j = 10
-    // Reduced forms for l = 0 quoted in REFERENCES §3c (from memory).
+    // Reduced forms for l = 0 (Herzberg 1945, ch. IV; from memory).
     expect(honlLondonFactor(1, j, 0, 1)).toBeCloseTo((j + 2) / 2, 12)
     expect(honlLondonFactor(0, j, 0, 1)).toBeCloseTo((2 * j + 1) / 2, 12)
     expect(honlLondonFactor(-1, j, 0, 1)).toBeCloseTo((j - 1) / 2, 12)
   })
 
-  it('when the band is Σ–Σ, returns J+1 (R), J (P) and 0 (Q) (REFERENCES §3c)', () => {
+  it('when the band is Σ–Σ, returns J+1 (R), J (P) and 0 (Q)', () => {
     expect(honlLondonFactor(1, 7, 0, 0)).toBe(8)
     expect(honlLondonFactor(-1, 7, 0, 0)).toBe(7)
     expect(honlLondonFactor(0, 7, 0, 0)).toBe(0)

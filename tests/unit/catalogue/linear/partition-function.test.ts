@@ -10,7 +10,7 @@ import {
 import { expectRelativeClose } from '../../../support/expect-close'
 
 // Published totals Q(296), isotopologue table of the public spectroscopic database
-// (Gordon et al. 2022, JQSRT 277, 107949), VERIFIED in REFERENCES §3a (CO2) and §4 (N2O).
+// (Gordon et al. 2022, JQSRT 277, 107949).
 const PUBLISHED_Q296: Record<string, number> = {
   '626': 286.09,
   '636': 576.64,
@@ -47,7 +47,7 @@ describe('linearPartitionFunction', () => {
 
   it('when T = 220 K, agrees with the classical rigid-rotor × Q_vib scaling within 0.5 %', () => {
     // Common practice: Q(T) ≈ Q(296)(T/296) Q_vib(T)/Q_vib(296) (approximatePartitionFunction of
-    // shared/physics), which omits the +1/3 quantum correction (≈0.15 % at 220 K).
+    // shared/physics), which omits the +1/(3σ) quantum correction (≈0.1 % at 220 K).
     for (const iso of LINEAR_ISOTOPOLOGUES) {
       const approximate = approximatePartitionFunction(
         getIsotopologue(iso.moleculeId, iso.isotopologueId),
@@ -79,7 +79,8 @@ describe('linearPartitionFunctionLookup', () => {
   })
 
   it('when asked for another isotopologue, falls back to the approximate table function', () => {
-    // H2O 161, Q(296) = 174.58 (REFERENCES §4, VERIFIED); the fallback is exact at 296 K.
+    // H2O 161, Q(296) = 174.58 (Gordon et al. 2022, JQSRT 277, 107949); the fallback is exact at
+    // 296 K.
     expectRelativeClose(linearPartitionFunctionLookup(1, 1)(296), 174.58, 1e-12, 'H2O 161')
   })
 })

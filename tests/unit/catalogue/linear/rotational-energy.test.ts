@@ -8,8 +8,9 @@ import {
 } from '../../../../shared/catalogue/linear/rotational-energy'
 import { expectAbsoluteClose } from '../../../support/expect-close'
 
-// CO2 constants of REFERENCES §3b (MEMORY): B₀ = 0.3902189, D₀ = 1.333e-7; 01101: G = 667.3799
-// (VERIFIED), B_e = 0.390639, B_f = 0.391254.
+// CO2 constants of Rothman et al. 1992, JQSRT 48, 537 (from memory): B₀ = 0.3902189,
+// D₀ = 1.333e-7; 01101: G = 667.3799 (confirmed against an independent listing), B_e = 0.390639,
+// B_f = 0.391254.
 describe('rovibrationalEnergyCm', () => {
   it('when the level is the ground state, returns B J(J+1) − D [J(J+1)]²', () => {
     const x = 20 * 21

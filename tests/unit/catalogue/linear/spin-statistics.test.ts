@@ -11,7 +11,7 @@ const iso636 = LINEAR_ISOTOPOLOGUES.find((iso) => iso.code === '636')!
 const iso628 = LINEAR_ISOTOPOLOGUES.find((iso) => iso.code === '628')!
 
 describe('nuclearSpinWeight', () => {
-  // Rules of REFERENCES §3a (MEMORY, standard; Herzberg 1945 ch. I–IV).
+  // Nuclear-spin statistics (Herzberg 1945, Infrared and Raman Spectra, ch. I–IV; from memory).
   it('when the level is the 626 Σg⁺ ground state, returns 1 for even J and 0 for odd J', () => {
     for (let j = 0; j <= 10; j++) {
       expect(nuclearSpinWeight(iso626, CO2_626_LEVELS.L00001, j, 'e')).toBe(j % 2 === 0 ? 1 : 0)
@@ -39,13 +39,13 @@ describe('nuclearSpinWeight', () => {
     }
   })
 
-  it('when the isotopologue is 636, applies the same rule as 626 (REFERENCES §3a)', () => {
+  it('when the isotopologue is 636, applies the same rule as 626', () => {
     expect(iso636.exchangeSymmetric).toBe(true)
     expect(nuclearSpinWeight(iso636, iso636.levels[0], 1, 'e')).toBe(0)
     expect(nuclearSpinWeight(iso636, iso636.levels[0], 2, 'e')).toBe(1)
   })
 
-  it('when the isotopologue is 628 or N2O, keeps every level (REFERENCES §3a)', () => {
+  it('when the isotopologue is 628 or N2O, keeps every level', () => {
     for (let j = 0; j <= 6; j++) {
       expect(nuclearSpinWeight(iso628, CO2_628_LEVELS.L00001, j, 'e')).toBe(1)
     }

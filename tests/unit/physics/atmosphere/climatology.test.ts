@@ -33,7 +33,7 @@ describe('CLIMATOLOGY_PRESETS', () => {
   })
 
   it('when compared with published standard-atmosphere surface temperatures, lies within 1 K', () => {
-    // Anderson et al. 1986, AFGL-TR-86-0110 (REFERENCES §7b, from memory): TRP 299.7, MLS 294.2,
+    // Anderson et al. 1986, AFGL-TR-86-0110 (from memory): TRP 299.7, MLS 294.2,
     // MLW 272.2, SAS 287.2, SAW 257.2 K — used only as guides for our own round values.
     const guides: Record<string, number> = {
       tropical: 299.7,

@@ -52,8 +52,8 @@ function expectToPrintedDigits(
 const C = 273.15
 
 describe('saturationVapourPressureOverWaterPa (Murphy & Koop 2005 eq. 10)', () => {
-  it('when at 0, 20, 30 and −20 °C, returns the REFERENCES §10 values to the printed digits', () => {
-    // REFERENCES.md §10, column "Murphy & Koop 2005" (COMPUTED from the formula; hPa).
+  it('when at 0, 20, 30 and −20 °C, returns the hand-computed values to the printed digits', () => {
+    // Computed by hand from Murphy & Koop 2005, QJRMS 131, 1539 (formula from memory); hPa.
     const rows: Array<[number, number, number]> = [
       [0, 6.1121, 0.00005],
       [20, 23.394, 0.0005],
@@ -70,7 +70,7 @@ describe('saturationVapourPressureOverWaterPa (Murphy & Koop 2005 eq. 10)', () =
   })
 
   it('when compared with the WMO/Goff–Gratch values, agrees within 0.1 %', () => {
-    // REFERENCES.md §10 column "WMO/Goff (ETH form)" (VERIFIED formula, COMPUTED values); the two
+    // Computed by hand from the WMO form of Goff–Gratch (Goff 1965); the two
     // formulations differ by < 0.05 % above 0 °C (Murphy & Koop 2005 §4, from memory).
     const rows: Array<[number, number]> = [
       [0, 6.1111],
@@ -101,7 +101,7 @@ describe('saturationVapourPressureOverWaterPa (Murphy & Koop 2005 eq. 10)', () =
 
 describe('saturationVapourPressureOverIcePa (Murphy & Koop 2005 eq. 7)', () => {
   it('when at −20 °C, returns 1.0325 hPa', () => {
-    // REFERENCES.md §10, "−20 °C over ice", Murphy & Koop column (COMPUTED): 1.0325 hPa.
+    // Computed by hand from Murphy & Koop 2005, QJRMS 131, 1539, ice formula: 1.0325 hPa.
     expectToPrintedDigits(
       saturationVapourPressureOverIcePa(-20 + C) / 100,
       1.0325,
@@ -111,7 +111,7 @@ describe('saturationVapourPressureOverIcePa (Murphy & Koop 2005 eq. 7)', () => {
   })
 
   it('when at −20 °C, agrees with Goff–Gratch ice (1.031 hPa) within 0.2 %', () => {
-    // REFERENCES.md §10 GG-ice 1.031 hPa (COMPUTED, 4 digits).
+    // Goff–Gratch over ice 1.031 hPa (computed by hand, 4 digits).
     expectRelClose(saturationVapourPressureOverIcePa(-20 + C) / 100, 1.031, 2e-3)
   })
 
@@ -128,8 +128,8 @@ describe('saturationVapourPressureOverIcePa (Murphy & Koop 2005 eq. 7)', () => {
 })
 
 describe('saturationVapourPressureBoltonPa (Bolton 1980)', () => {
-  it('when at 0, 20, 30 and −20 °C, returns the REFERENCES §10 Bolton column', () => {
-    // REFERENCES.md §10 Bolton column (VERIFIED formula; COMPUTED values, hPa).
+  it('when at 0, 20, 30 and −20 °C, returns the hand-computed Bolton values', () => {
+    // Computed by hand from Bolton 1980, Mon. Wea. Rev. 108, 1046 (hPa).
     const rows: Array<[number, number, number]> = [
       [0, 6.112, 0.00005],
       [20, 23.37, 0.001], // formula gives 23.3695; §10 prints 23.370 — one unit allowed
@@ -146,7 +146,7 @@ describe('saturationVapourPressureBoltonPa (Bolton 1980)', () => {
   })
 
   it('when within −30…35 °C, stays within 0.3 % of Murphy & Koop', () => {
-    // Bolton 1980 quotes ±0.1 % against Wexler's values (REFERENCES §10, VERIFIED); allow 0.3 %
+    // Bolton 1980 quotes ±0.1 % against Wexler's values (for −30…35 °C); allow 0.3 %
     // against a different reference formulation.
     for (let t = -30; t <= 35; t += 5) {
       expectRelClose(
@@ -201,7 +201,7 @@ describe('dew point and frost point', () => {
   })
 
   it('when e = 12.272 hPa, the two dew points agree with 10 °C within 0.02 K', () => {
-    // REFERENCES.md §10 worked value: T_d = 10 °C ⇒ e = 12.272 hPa (Bolton, COMPUTED).
+    // Worked value: T_d = 10 °C ⇒ e = 12.272 hPa (computed by hand with Bolton 1980).
     expect(Math.abs(dewPointBoltonK(1227.2) - (10 + C))).toBeLessThan(0.001)
     expect(Math.abs(dewPointK(1227.2) - (10 + C))).toBeLessThan(0.02)
     expectRelClose(
@@ -220,20 +220,21 @@ describe('dew point and frost point', () => {
 
 describe('mixing ratio, specific humidity and vmr', () => {
   it('when T_d = 10 °C at 1000 hPa (Bolton e), returns r = 7.73 g/kg', () => {
-    // REFERENCES.md §10 worked value (COMPUTED with ε = 0.622, from memory): r = 7.73 g/kg.
+    // Worked value (computed by hand with Bolton 1980 e_s and ε = 0.622, from memory): r = 7.73
+    // g/kg.
     const e = saturationVapourPressureBoltonPa(10 + C)
     expectToPrintedDigits(e / 100, 12.272, 0.0005, 'e(10 °C)')
     expectToPrintedDigits(mixingRatioFromVapourPressure(e, 100000) * 1000, 7.73, 0.005, 'r')
   })
 
   it('when T_d = 20 °C at 1013.25 hPa (Bolton e), returns r = 14.68 g/kg', () => {
-    // REFERENCES.md §10 worked value (COMPUTED): r = 14.68 g/kg.
+    // Worked value (computed by hand with Bolton 1980 e_s): r = 14.68 g/kg.
     const e = saturationVapourPressureBoltonPa(20 + C)
     expectToPrintedDigits(mixingRatioFromVapourPressure(e, 101325) * 1000, 14.68, 0.005, 'r')
   })
 
   it('when ε is computed from the molar masses, is 0.622 to three digits', () => {
-    // ε = R_d/R_v = 0.622 (REFERENCES §10, from memory); 18.015 28/28.9644 = 0.621 98.
+    // ε = R_d/R_v = 0.622 (from memory); 18.015 28/28.9644 = 0.621 98.
     expectToPrintedDigits(EPSILON_WATER_DRY_AIR, 0.622, 0.0005, 'ε')
   })
 

@@ -160,7 +160,7 @@ describe('hydrostaticPressuresPa', () => {
   })
 
   it('when given the U.S. 1976 temperatures at geopotential heights, matches its pressures to 3e-5', () => {
-    // U.S. Standard Atmosphere 1976 (REFERENCES §2); the residual is R*(1976) = 8.314 32 vs CODATA
+    // U.S. Standard Atmosphere 1976 (NOAA/NASA/USAF); the residual is R*(1976) = 8.314 32 vs CODATA
     // 8.314 462 6 (1.7e-5 relative in the exponent, times ln(p₀/p) ≤ 1.5 below 11 km).
     const z = [0, 2000, 5000, 8000, 11000]
     const states = z.map((h) => usStandardAtmosphere1976AtGeopotential(h))

@@ -20,8 +20,9 @@ function expectRelClose(actual: number, expected: number, tol: number, label = '
 }
 
 describe('greenOzoneColumnAboveMoleculesPerCm2', () => {
-  it('when a = 0.4 cm, b = 20 km, c = 5 km, returns the REFERENCES §10 column table', () => {
-    // REFERENCES.md §10 (Green 1964 / Lacis & Hansen 1974 form MEMORY; u COMPUTED, cm STP):
+  it('when a = 0.4 cm, b = 20 km, c = 5 km, returns the hand-computed column table', () => {
+    // Green 1964 form as used by Lacis & Hansen 1974, J. Atmos. Sci. 31, 118 (from memory); u
+    // computed by hand (cm STP):
     // 0 km 0.400, 10 km 0.359, 20 km 0.204, 30 km 0.049, 40 km 0.007. 1 cm STP = 1000 DU.
     const rows: Array<[number, number]> = [
       [0, 0.4],

@@ -23,9 +23,10 @@ function expectToPrintedDigits(
 }
 
 describe('usStandardAtmosphere1976AtGeopotential', () => {
-  // REFERENCES.md §2 "Tabulated points" (geopotential rows VERIFIED against the av8n page;
-  // computed from the standard's definition). Columns: H (m′), T (K), p (Pa), ρ (kg m⁻³),
-  // with the half-unit of the last printed digit of each.
+  // U.S. Standard Atmosphere 1976 (NOAA/NASA/USAF) tabulated points, computed from the standard's
+  // definition (its defining constants and layer table); they match the standard's printed values.
+  // Columns: H (m′), T (K), p (Pa), ρ (kg m⁻³), with the half-unit of the last printed digit of
+  // each.
   const rows: Array<[number, number, number, number, number, number]> = [
     // H, T, p, halfUnit p, ρ, halfUnit ρ
     [0, 288.15, 101325, 0.5, 1.225, 0.00005],
@@ -38,7 +39,7 @@ describe('usStandardAtmosphere1976AtGeopotential', () => {
     [71000, 214.65, 3.9564, 0.00005, 6.421e-5, 0.000000005],
   ]
 
-  it('when given the layer bases, returns T, p and ρ of REFERENCES §2 to the printed digits', () => {
+  it('when given the layer bases, returns T, p and ρ of the standard to the printed digits', () => {
     for (const [h, t, p, pHalf, rho, rhoHalf] of rows) {
       const state = usStandardAtmosphere1976AtGeopotential(h)
       expectToPrintedDigits(state.temperatureK, t, 0.0005, `T(${h} m′)`)
@@ -47,8 +48,9 @@ describe('usStandardAtmosphere1976AtGeopotential', () => {
     }
   })
 
-  it('when given the layer bases, returns the 7-digit base pressures of REFERENCES §2', () => {
-    // REFERENCES.md §2 layer table (p_b COMPUTED; av8n digits VERIFIED).
+  it('when given the layer bases, returns the 7-digit base pressures of the standard', () => {
+    // Layer table of the standard (p_b computed from its definition; they reproduce the printed
+    // 6-digit base pressures).
     const bases: Array<[number, number, number]> = [
       [11000, 22632.06, 0.005],
       [20000, 5474.889, 0.0005],
@@ -67,8 +69,8 @@ describe('usStandardAtmosphere1976AtGeopotential', () => {
   })
 
   it('when at the 86 km top, returns T_M = 186.946 K, p = 0.37338 Pa and kinetic T = 186.87 K', () => {
-    // REFERENCES.md §2 row b = 7: T_M 186.946 K, p 0.373 38 Pa (COMPUTED); kinetic 186.87 K
-    // (from memory; = T_M × 0.999579, the standard's Table 8 M/M₀ at 86 km).
+    // Standard's top row b = 7: T_M 186.946 K, p 0.373 38 Pa (computed from the definition);
+    // kinetic 186.87 K (from memory; = T_M × 0.999579, the standard's Table 8 M/M₀ at 86 km).
     const state = usStandardAtmosphere1976(86000)
     expectToPrintedDigits(state.molecularScaleTemperatureK, 186.946, 0.0005, 'T_M(86 km)')
     expectToPrintedDigits(state.pressurePa, 0.37338, 0.000005, 'p(86 km)')
@@ -77,8 +79,8 @@ describe('usStandardAtmosphere1976AtGeopotential', () => {
 })
 
 describe('usStandardAtmosphere1976 (geometric height)', () => {
-  // REFERENCES.md §2 geometric rows (COMPUTED from the definition; 5 km row: printed table
-  // values, from memory, reproduced exactly).
+  // U.S. Standard Atmosphere 1976 (NOAA/NASA/USAF) at geometric heights (computed from the
+  // definition; 5 km row: printed table values, from memory, reproduced exactly).
   const rows: Array<[number, number, number, number, number, number]> = [
     [5000, 255.676, 54048, 0.5, 0.73643, 0.000005],
     [10000, 223.252, 26500, 0.5, 0.41351, 0.000005],
@@ -86,7 +88,7 @@ describe('usStandardAtmosphere1976 (geometric height)', () => {
     [32000, 228.49, 889.06, 0.005, 0.013555, 0.0000005],
   ]
 
-  it('when given 5, 10, 20 and 32 km, returns REFERENCES §2 values to the printed digits', () => {
+  it('when given 5, 10, 20 and 32 km, returns the values of the standard to the printed digits', () => {
     for (const [z, t, p, pHalf, rho, rhoHalf] of rows) {
       const state = usStandardAtmosphere1976(z)
       expectToPrintedDigits(state.temperatureK, t, 0.0005, `T(${z} m)`)
@@ -96,7 +98,7 @@ describe('usStandardAtmosphere1976 (geometric height)', () => {
   })
 
   it('when at 5 km geometric, reports a geopotential height of 4996.1 m′', () => {
-    // REFERENCES.md §2: "5 km geometric (H = 4996.1 m′)".
+    // 5 km geometric is H = 4996.1 m′ (H = r₀z/(r₀ + z), computed by hand).
     expectToPrintedDigits(
       usStandardAtmosphere1976(5000).geopotentialHeightM,
       4996.1,
@@ -156,7 +158,8 @@ describe('geopotential ↔ geometric height', () => {
   })
 
   it('when at 11 km′, returns 11 019.07 m geometric', () => {
-    // H = r₀z/(r₀ + z), r₀ = 6 356 766 m (REFERENCES §2); z = r₀H/(r₀ − H) = 11 019.068 m (COMPUTED).
+    // H = r₀z/(r₀ + z), r₀ = 6 356 766 m (U.S. Standard Atmosphere 1976); z = r₀H/(r₀ − H) = 11
+    // 019.068 m (computed by hand).
     expectToPrintedDigits(geopotentialToGeometricHeightM(11000), 11019.068, 0.0005, 'z(11 km′)')
   })
 })

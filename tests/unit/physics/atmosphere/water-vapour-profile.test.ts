@@ -9,7 +9,7 @@ import { PhysicsError } from '../../../../shared/physics/errors'
 
 describe('manabeWetheraldRelativeHumidity', () => {
   it('when at the surface, returns RH* = 0.77; when Q ≤ 0.02, returns 0', () => {
-    // Manabe & Wetherald 1967 (REFERENCES §10, form from memory): RH = RH*(Q − 0.02)/0.98.
+    // Manabe & Wetherald 1967, J. Atmos. Sci. 24, 241 (form from memory): RH = RH*(Q − 0.02)/0.98.
     expect(manabeWetheraldRelativeHumidity(101325, 101325)).toBeCloseTo(0.77, 15)
     expect(manabeWetheraldRelativeHumidity(2000, 101325)).toBe(0)
     expect(manabeWetheraldRelativeHumidity(1000, 101325)).toBe(0)

@@ -8,14 +8,14 @@ import {
 import { PhysicsError } from '../../../../shared/physics/errors'
 import { expectRelativeClose } from '../../../support/expect-close'
 
-// Check values: COMPUTED from the piecewise form and coefficients of REFERENCES §3e (Perrin &
-// Hartmann 1989, JQSRT 42, 311; MEMORY-low) with Python 3 math.exp, 9 significant digits; they test
-// the implementation of that form, not the (recalled) coefficients.
+// Check values: computed from the piecewise form and coefficients of Perrin & Hartmann 1989,
+// JQSRT 42, 311 (from memory, low confidence) with Python 3 math.exp, 9 significant digits; they
+// test the implementation of that form, not the (recalled) coefficients.
 
 describe('co2ChiCoefficients', () => {
   it('when T = 296 K, returns B₁ = 0.0412599, B₂ = 0.0335419, B₃ = 0.0232', () => {
     const c = co2ChiCoefficients(296)
-    // REFERENCES §3e formulas, computed with Python math.exp (6 digits): 1e-5.
+    // Perrin & Hartmann formulas, computed with Python math.exp (6 digits): 1e-5.
     expectRelativeClose(c.b1PerCm, 0.0412599, 1e-5)
     expectRelativeClose(c.b2PerCm, 0.0335419, 1e-5)
     expect(c.b3PerCm).toBe(0.0232)
@@ -30,12 +30,12 @@ describe('co2ChiCoefficients', () => {
 
 describe('co2ChiFactor', () => {
   it('when |Δν| ≤ σ₁ = 3 cm⁻¹, returns exactly 1', () => {
-    // Definition (REFERENCES §3e): Lorentzian inside σ₁.
+    // Definition (Perrin & Hartmann 1989): Lorentzian inside σ₁.
     for (const d of [0, 0.5, -2, 3, -3]) expect(co2ChiFactor(d, 296)).toBe(1)
   })
 
   it('when evaluated at 10, 30, 60, 120 and 200 cm⁻¹ at 296 K, returns the computed values', () => {
-    // Python math.exp of the REFERENCES §3e form (9 digits): 1e-8.
+    // Python math.exp of the Perrin & Hartmann form (9 digits): 1e-8.
     const expected: [number, number][] = [
       [10, 0.749147626],
       [30, 0.328237785],
@@ -50,7 +50,7 @@ describe('co2ChiFactor', () => {
   })
 
   it('when evaluated at 200 K, returns the computed values (weaker wing reduction than at 296 K)', () => {
-    // Python math.exp of the REFERENCES §3e form (9 digits): 1e-8.
+    // Python math.exp of the Perrin & Hartmann form (9 digits): 1e-8.
     const expected: [number, number][] = [
       [10, 0.879574908],
       [30, 0.609610377],
@@ -67,7 +67,7 @@ describe('co2ChiFactor', () => {
   })
 
   it('when crossing σ₁, σ₂ and σ₃, is continuous', () => {
-    // Continuity of the piecewise form (REFERENCES §3e): the jump over ±1e-9 cm⁻¹ is below
+    // Continuity of the piecewise form (Perrin & Hartmann 1989): the jump over ±1e-9 cm⁻¹ is below
     // B_max · 2e-9 ≈ 2e-10 relative.
     const { sigma1, sigma2, sigma3 } = CO2_CHI_BREAKPOINTS_CM
     for (const temperatureK of [160, 200, 296, 500]) {
@@ -80,7 +80,7 @@ describe('co2ChiFactor', () => {
   })
 
   it('when the detuning grows, never increases and stays in (0, 1]', () => {
-    // Sub-Lorentzian wing: B₁, B₂, B₃ > 0 for T ≥ 150 K (REFERENCES §3e form).
+    // Sub-Lorentzian wing: B₁, B₂, B₃ > 0 for T ≥ 150 K (Perrin & Hartmann 1989 form).
     for (const temperatureK of [150, 220, 296, 800]) {
       let previous = 1
       for (let d = 0; d <= 400; d += 0.5) {

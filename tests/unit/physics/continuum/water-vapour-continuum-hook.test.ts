@@ -45,7 +45,7 @@ describe('createWaterVapourContinuumHook', () => {
       // Range and taper of water-vapour-continuum.ts (module comment).
       if (nu <= 650 || nu >= 1300) expect(tau[i], `${nu}`).toBe(0)
       else expect(tau[i], `${nu}`).toBeGreaterThan(0)
-      // Roberts form τ = w C_s(ν, T) N_w [e + γ(P − e)] (REFERENCES §5): 1e-12.
+      // Roberts form τ = w C_s(ν, T) N_w [e + γ(P − e)] (Roberts et al. 1976; from memory): 1e-12.
       const e = 0.0197
       const expected =
         waterContinuumWindowWeight(nu) *
@@ -57,7 +57,7 @@ describe('createWaterVapourContinuumHook', () => {
   })
 
   it('when the water column doubles, doubles the optical depth', () => {
-    // τ ∝ N_w at fixed e and P (REFERENCES §5 form): 1e-14.
+    // τ ∝ N_w at fixed e and P (Roberts form): 1e-14.
     const doubled = opticalDepth(layerOf(9.8e22, 0.0197))
     GRID.forEach((nu, i) => {
       if (tau[i] > 0) expectRelativeClose(doubled[i], 2 * tau[i], 1e-14, `${nu}`)
@@ -65,7 +65,7 @@ describe('createWaterVapourContinuumHook', () => {
   })
 
   it('when the pressure halves at fixed column and mixing ratio, halves the optical depth', () => {
-    // e = xP and P − e = (1 − x)P both halve, so τ ∝ P (REFERENCES §5 form): 1e-14.
+    // e = xP and P − e = (1 − x)P both halve, so τ ∝ P (Roberts form): 1e-14.
     const halved = opticalDepth(layerOf(4.9e22, 0.0197, 101325 / 2))
     const i = 1000 - 500
     expectRelativeClose(halved[i], tau[i] / 2, 1e-14)
@@ -75,13 +75,13 @@ describe('createWaterVapourContinuumHook', () => {
     const i = 1000 - 500
     const self = opticalDepth(base, { foreign: false })[i]
     const foreign = opticalDepth(base, { self: false })[i]
-    // Ratio of the pressure terms, 0.0197 / (0.002 · 0.9803) (REFERENCES §5 form): 1e-13.
+    // Ratio of the pressure terms, 0.0197 / (0.002 · 0.9803) (Roberts form): 1e-13.
     expectRelativeClose(self / foreign, 0.0197 / (0.002 * (1 - 0.0197)), 1e-13)
     expectRelativeClose(self + foreign, tau[i], 1e-14)
   })
 
   it('when the layer is colder, scales by exp[1800(1/T − 1/296)]', () => {
-    // Roberts temperature factor (REFERENCES §5): 260 K gives ×2.32 (COMPUTED, 3 digits): 0.1 %.
+    // Roberts temperature factor: 260 K gives ×2.32 (computed by hand, 3 digits): 0.1 %.
     const cold = opticalDepth(layerOf(4.9e22, 0.0197, 101325, 260))
     const i = 1000 - 500
     expectRelativeClose(cold[i] / tau[i], 2.32, 1e-3)

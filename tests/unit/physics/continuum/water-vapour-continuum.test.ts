@@ -15,7 +15,7 @@ import { PhysicsError } from '../../../../shared/physics/errors'
 import type { AtmosphereLayer } from '../../../../shared/physics/types'
 import { expectRelativeClose } from '../../../support/expect-close'
 
-/** The REFERENCES §5 worked example: 1 km, 296 K, e = 20 hPa, P = 1013.25 hPa. */
+/** Worked example (computed by hand): 1 km, 296 K, e = 20 hPa, P = 1013.25 hPa. */
 const PATH_LENGTH_CM = 1e5
 const WATER_PRESSURE_PA = 2000
 const TOTAL_PRESSURE_PA = 101325
@@ -38,8 +38,9 @@ function layerOf(overrides: Partial<AtmosphereLayer> = {}): AtmosphereLayer {
 
 describe('waterContinuumCoefficient296Cm2PerMoleculeAtm', () => {
   it('when evaluated at 800, 1000 and 1200 cm⁻¹, returns the tabulated C_s(296 K)', () => {
-    // REFERENCES §5, COMPUTED from a + b e^{−βν}, 3 significant digits given: tolerance half a unit
-    // of the last digit, 0.4 %.
+    // Computed by hand from a + b e^{−βν} (Roberts, Selby & Biberman 1976, Appl. Opt. 15, 2085;
+    // coefficients from memory), 3 significant digits given: tolerance half a unit of the last
+    // digit, 0.4 %.
     expectRelativeClose(waterContinuumCoefficient296Cm2PerMoleculeAtm(800), 4.33e-22, 4e-3)
     expectRelativeClose(waterContinuumCoefficient296Cm2PerMoleculeAtm(1000), 1.89e-22, 4e-3)
     expectRelativeClose(waterContinuumCoefficient296Cm2PerMoleculeAtm(1200), 1.38e-22, 4e-3)
@@ -53,9 +54,9 @@ describe('waterContinuumCoefficient296Cm2PerMoleculeAtm', () => {
 
 describe('waterContinuumTemperatureFactor', () => {
   it('when T = 296 K, returns 1; when T = 260 K, returns 2.32', () => {
-    // Definition exp[1800(1/T − 1/296)] (Roberts et al. 1976; REFERENCES §5, MEMORY).
+    // Definition exp[1800(1/T − 1/296)] (Roberts et al. 1976; from memory).
     expect(waterContinuumTemperatureFactor(296)).toBe(1)
-    // REFERENCES §5 "T-factor 296→260 K ×2.32" (COMPUTED, 3 digits): tolerance 0.1 %.
+    // T-factor 296→260 K ×2.32 (computed by hand, 3 digits): tolerance 0.1 %.
     expectRelativeClose(waterContinuumTemperatureFactor(260), 2.32, 1e-3)
   })
 
@@ -65,7 +66,8 @@ describe('waterContinuumTemperatureFactor', () => {
   })
 
   it('when multiplied into C_s, returns C_s(ν, T) = C_s(ν, 296) · factor', () => {
-    // Definition of the Roberts form (REFERENCES §5).
+    // Definition of the Roberts form (Roberts, Selby & Biberman 1976, Appl. Opt. 15, 2085; from
+    // memory).
     expectRelativeClose(
       waterContinuumCoefficientCm2PerMoleculeAtm(1000, 260),
       waterContinuumCoefficient296Cm2PerMoleculeAtm(1000) * waterContinuumTemperatureFactor(260),
@@ -105,12 +107,12 @@ describe('waterContinuumWindowWeight', () => {
 
 describe('waterContinuumPressureTermAtm', () => {
   it('when e = 20 hPa and P = 1013.25 hPa, returns e + γ(P − e) = 0.02170 atm', () => {
-    // REFERENCES §5 worked example, [e + γ(P − e)] = 0.02170 atm (COMPUTED; 4 digits): 0.02 %.
+    // Worked example, [e + γ(P − e)] = 0.02170 atm (computed by hand; 4 digits): 0.02 %.
     expectRelativeClose(waterContinuumPressureTermAtm(2000 / 101325, 1), 0.0217, 2e-4)
   })
 
   it('when only self or only foreign is chosen, returns e or γ(P − e)', () => {
-    // Definition of the two terms (REFERENCES §5), γ = 0.002.
+    // Definition of the two terms (Roberts et al. 1976; from memory), γ = 0.002.
     expect(waterContinuumPressureTermAtm(0.02, 1, { foreign: false })).toBe(0.02)
     expectRelativeClose(
       waterContinuumPressureTermAtm(0.02, 1, { self: false }),
@@ -126,16 +128,16 @@ describe('waterContinuumPressureTermAtm', () => {
 })
 
 describe('waterContinuumOpticalDepth', () => {
-  it('when given the REFERENCES §5 worked example at 1000 cm⁻¹, returns τ ≈ 0.20', () => {
+  it('when given the worked example at 1000 cm⁻¹, returns τ ≈ 0.20', () => {
     const tau = waterContinuumOpticalDepth(1000, {
       temperatureK: 296,
       waterColumnMoleculesPerCm2: WATER_NUMBER_DENSITY_PER_CM3 * PATH_LENGTH_CM,
       waterPressureAtm: WATER_PRESSURE_PA / TOTAL_PRESSURE_PA,
       totalPressureAtm: 1,
     })
-    // n_w = 4.894e17 cm⁻³ (REFERENCES §5, COMPUTED; 4 digits): 0.05 %.
+    // n_w = 4.894e17 cm⁻³ (computed by hand, n = e/kT; 4 digits): 0.05 %.
     expectRelativeClose(WATER_NUMBER_DENSITY_PER_CM3, 4.894e17, 5e-4)
-    // τ ≈ 0.20 (REFERENCES §5, COMPUTED there from the formula; 2 digits given): 1 %.
+    // τ ≈ 0.20 (computed by hand from the formula; 2 digits given): 1 %.
     expectRelativeClose(tau, 0.2, 1e-2)
   })
 

@@ -21,8 +21,8 @@ describe('brightnessTemperatureSpectrumK', () => {
     temps.forEach((t, i) => expectRelClose(tb[i], t, 1e-13, `ν=${nu[i]}`))
   })
 
-  it('when given B(667 cm⁻¹, 288 K) = 0.130906 from REFERENCES §1, returns 288 K (rel 2e-6)', () => {
-    // REFERENCES.md §1 Planck checks (COMPUTED, 6 digits): B(667, 288) = 0.130906,
+  it('when given B(667 cm⁻¹, 288 K) = 0.130906, returns 288 K (rel 2e-6)', () => {
+    // Planck function with CODATA 2018 constants, computed (6 digits): B(667, 288) = 0.130906,
     // B(1000, 288) = 0.081142, B(500, 250) = 0.088774. 6 digits in B → ~1e-6 in T.
     const tb = brightnessTemperatureSpectrumK(
       Float64Array.of(667, 1000, 500),

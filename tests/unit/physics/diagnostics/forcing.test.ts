@@ -35,7 +35,8 @@ describe('radiativeForcing', () => {
 describe('forcing from the solver — tent-shaped absorber over a warm surface', () => {
   // A single isothermal "stratosphere" at 220 K over a 288 K blackbody surface, absorption
   // coefficient κ = κ₀ e^{−|ν − ν₀|/l} (tent; Wilson & Gea-Banacloche 2012, Am. J. Phys. 80,
-  // 306; l = 10.2 cm⁻¹, ν₀ = 667.5 cm⁻¹ from REFERENCES §6, MEMORY-low), column doubled.
+  // 306; l = 10.2 cm⁻¹, ν₀ = 667.5 cm⁻¹ from Jeevanjee, Seeley, Paynter & Fueglistaler 2021,
+  // J. Climate 34, from memory, low confidence), column doubled.
   const l = 10.2
   const nu0 = 667.5
   const nu = Float64Array.from({ length: 20001 }, (_, i) => 467.5 + i * 0.02)
@@ -54,8 +55,8 @@ describe('forcing from the solver — tent-shaped absorber over a warm surface',
 
   it('when CO₂ is doubled, returns the exact slab forcing ∫π[B(T_s) − B(T_strat)]·2[E₃(τ) − E₃(2τ)]dν (rel 1e-5)', () => {
     // Analytic: OLR(ν) = πB(T_s)·2E₃(τ) + πB(T_strat)[1 − 2E₃(τ)] for an isothermal slab over a
-    // black surface (REFERENCES §8b flux transmittance), integrated with the same trapezoid
-    // weights; E₃ from the mpmath-checked exponentialIntegralEn. 16 Gauss nodes: < 1e-6.
+    // black surface (flux transmittance 2E₃(τ), common practice), integrated with the same
+    // trapezoid weights; E₃ from the mpmath-checked exponentialIntegralEn. 16 Gauss nodes: < 1e-6.
     const before = run(1, 220)
     const after = run(2, 220)
     const f = radiativeForcing(before.fluxNetUpWPerM2, after.fluxNetUpWPerM2, 1)
@@ -68,8 +69,8 @@ describe('forcing from the solver — tent-shaped absorber over a warm surface',
         w[j] * dB * 2 * (exponentialIntegralEn(3, tau) - exponentialIntegralEn(3, 2 * tau))
     }
     expectRelClose(f.toaWPerM2, expected, 1e-5)
-    // Tent-model closed form 2 l ln2 π[B(667, 288) − B(667, 220)] = 3.79 W m⁻² (REFERENCES §6,
-    // COMPUTED): exact for B constant over the band (Frullani integral); here B varies across
+    // Tent-model closed form 2 l ln2 π[B(667, 288) − B(667, 220)] = 3.79 W m⁻² (computed by
+    // hand): exact for B constant over the band (Frullani integral); here B varies across
     // the wings, so agreement within 3 % is expected.
     expectRelClose(f.toaWPerM2, 3.79, 0.03, 'tent model')
     expect(f.toaWPerM2).toBeGreaterThan(0)
@@ -79,7 +80,7 @@ describe('forcing from the solver — tent-shaped absorber over a warm surface',
   it('when the absorbing layer is warmer than the surface, returns negative TOA forcing', () => {
     // Sign: adding absorber raises the emission level; if it emits at a higher temperature
     // than the surface the OLR rises (negative forcing; cf. the CO₂ band centre and the warm
-    // stratosphere, REFERENCES §11).
+    // stratosphere; common practice).
     const before = run(1, 300)
     const after = run(2, 300)
     const f = radiativeForcing(before.fluxNetUpWPerM2, after.fluxNetUpWPerM2, 1)

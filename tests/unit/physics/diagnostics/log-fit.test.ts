@@ -6,7 +6,7 @@ import { expectRelClose } from '../transfer/expect-close'
 
 describe('fitLogarithmicForcing', () => {
   it('when the data follow 5.35 ln(C/C₀) exactly, returns a = 5.35, b = 0, R² = 1, 3.708 per doubling', () => {
-    // Myhre et al. 1998 (GRL 25, 2715) form; 5.35 ln 2 = 3.708 W m⁻² (REFERENCES §7a COMPUTED).
+    // Myhre et al. 1998 (GRL 25, 2715) form; 5.35 ln 2 = 3.708 W m⁻² (computed by hand).
     const c = [280, 350, 420, 560, 1120]
     const f = c.map((v) => 5.35 * Math.log(v / 280))
     const fit = fitLogarithmicForcing(c, f, 280)

@@ -9,7 +9,7 @@ import type { RadiationResult } from '../../../../shared/physics/engine/merge'
 // CO₂ forcing with the built-in catalogue, the whole chain from lines to fluxes. 500–1100 cm⁻¹
 // holds the 15 µm band and the 10 µm bands, where nearly all of CO₂'s longwave forcing is;
 // 31 levels keep the test quick. Tolerances are plausibility bands: the published line-by-line
-// numbers are from memory (REFERENCES.md §7b, MEMORY-low) and the catalogue has stated errors.
+// numbers are from memory (low confidence) and the catalogue has stated errors.
 const base = buildClimatologyProfile('mid-latitude-summer', { levelCount: 31, topPressurePa: 10 })
 const { table } = loadBuiltInCatalogue()
 const settings = { startCm: 500, endCm: 1100, chunkWidthCm: 20, outputResolutionCm: 1 }
@@ -27,8 +27,9 @@ describe('CO₂ forcing through the whole engine (mid-latitude summer, clear sky
   it('doubling 280 → 560 ppmv gives forcing in the published line-by-line range at the top, tropopause and surface', () => {
     const f = compareRuns(run(280), run(560))
     // Line-by-line, mid-latitude summer, instantaneous: TOA ≈ 2.8, 200 hPa ≈ 5.0–5.5, surface ≈ 1.6–2.0 W m⁻²
-    // (Collins et al. 2006, JGR 111, D14317, RTMIP; from memory, REFERENCES §7b MEMORY-low). Independent
-    // column model with a comparable synthesised catalogue: 2.4–2.6 / 4.5–4.7 / 0.9–1.3 (REFERENCES §11).
+    // (Collins et al. 2006, JGR 111, D14317, RTMIP; from memory, low confidence). An independent
+    // column model with a comparable synthesised catalogue gave 2.4–2.6 / 4.5–4.7 / 0.9–1.3
+    // (unpublished; from memory).
     expect(f.toaWPerM2).toBeGreaterThan(2.0)
     expect(f.toaWPerM2).toBeLessThan(3.4)
     expect(f.tropopauseWPerM2).toBeGreaterThan(4.0)

@@ -70,7 +70,7 @@ describe('computeRadiation', () => {
     expect(f.tropopauseWPerM2).toBeGreaterThan(0)
     // At the top, the saturated band centre emits from the warm stratosphere; more gas lifts that
     // level higher and warmer, so OLR there rises (negative forcing), while the flanks, emitted
-    // from the cooling troposphere, give positive forcing (line-by-line practice, e.g. REFERENCES §11).
+    // from the cooling troposphere, give positive forcing (common practice).
     const centre = before.wavenumberCm.findIndex((w) => w > 667 && w < 668)
     const flank = before.wavenumberCm.findIndex((w) => w > 698 && w < 699)
     expect(f.toaSpectral[centre]).toBeLessThan(0)

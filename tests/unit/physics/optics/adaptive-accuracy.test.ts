@@ -60,8 +60,8 @@ describe('adaptive spectral method against the brute-force reference', () => {
     expect(fluxError, message).toBeLessThanOrEqual(FLUX_TOLERANCE_W_PER_M2)
     expect(heatingError, message).toBeLessThanOrEqual(HEATING_TOLERANCE_K_PER_DAY)
     // The window really absorbs (otherwise the comparison proves nothing): the band centre is
-    // emitted from the warm stratosphere, so OLR is well below the surface emission (REFERENCES
-    // §11, line-by-line practice).
+    // emitted from the warm stratosphere, so OLR is well below the surface emission (common
+    // practice).
     expect(reference.olrWPerM2).toBeLessThan(0.8 * reference.fluxUpWPerM2[0])
     // Even on the dense Q branch the adaptive grid is several times coarser than the uniform one.
     expect(adaptive.gridPointCount).toBeLessThan(reference.gridPointCount / 2)

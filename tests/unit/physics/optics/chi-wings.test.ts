@@ -142,7 +142,8 @@ describe('χ wings: onset, pedestal and validation', () => {
   const layer = [singleLayer(ATM_PA, 296, 1e18)]
 
   it('when |ν − ν*| ≤ 3 cm⁻¹, returns τ unchanged (reference exactly, uniform path within 1.5e-4)', () => {
-    // χ = 1 up to σ₁ = 3 cm⁻¹ (Perrin & Hartmann 1989, JQSRT 42, 311; REFERENCES §3e, MEMORY-low).
+    // χ = 1 up to σ₁ = 3 cm⁻¹ (Perrin & Hartmann 1989, JQSRT 42, 311; from memory, low
+    // confidence).
     const input = { lines: line, layers: layer, startCm: 696, endCm: 704, stepCm: 2 ** -6 }
     const plain = computeReferenceOpticalDepth(input)
     const weighted = computeReferenceOpticalDepth({ ...input, options: { lineWingWeights: CHI } })
@@ -217,7 +218,7 @@ describe('χ wings: onset, pedestal and validation', () => {
 
 describe('χ wings: effect on a 1-atm single-layer CO₂ path', () => {
   // 1 atm, 296 K, the CO₂ column of the whole atmosphere at 400 ppmv (≈ 8.6e21 cm⁻²: 2.15e25 air
-  // molecules cm⁻² × 4e-4; from memory). REFERENCES §3e practice note (MEMORY): the total band
+  // molecules cm⁻² × 4e-4; from memory). Expected behaviour (from memory): the total band
   // absorption changes by ≪ 1 % while the far wing beyond the band drops by tens of per cent.
   const column = 8.6e21
   const path = [singleLayer(ATM_PA, 296, column)]

@@ -76,7 +76,7 @@ describe('computeLayerLineState', () => {
   })
 
   it('when the gas is CO2 at 667.38 cm⁻¹ and 296 K, returns the Doppler HWHM 6.20e-4 cm⁻¹', () => {
-    // REFERENCES §3d: α_D = 6.20 × 10⁻⁴ cm⁻¹ (computed there from (ν₀/c)√(2 ln2 kT/m)), 3 digits.
+    // α_D = 6.20 × 10⁻⁴ cm⁻¹ (computed by hand from (ν₀/c)√(2 ln2 kT/m), CODATA 2018), 3 digits.
     const table = toLineTable([line({ pressureShiftCmPerAtm: 0 })])
     const state = createLayerLineState(1)
     computeLayerLineState(table, singleLayer(1, 296, 1e19), state)

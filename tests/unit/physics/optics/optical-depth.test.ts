@@ -52,7 +52,7 @@ describe('computeChunkOpticalDepth: analytic checks', () => {
   })
 
   it('when a line has y = 1, returns S·u·√(ln2/π)/α_D·K(x, 1) at x = 0, 1, 3, 10 within 1e-4', () => {
-    // K(x, 1) from REFERENCES §8a (scipy.special.wofz); the fast path uses Humlíček's
+    // K(x, 1) computed with SciPy's scipy.special.wofz; the fast path uses Humlíček's
     // approximation, relative error ≤ 1e-4 (faddeeva.ts, measured against SciPy).
     const step = 2 ** -12
     const centre = Math.round(667.3 / step) * step

@@ -12,8 +12,8 @@ const SQRT_LN2 = Math.sqrt(Math.LN2)
 describe('computeReferenceOpticalDepth', () => {
   it('when a line has y = 1, returns S·u·√(ln2/π)/α_D·K(x, 1) at x = 0, 1, 3, 10', () => {
     // K(x, 1) = Re w(x + i): 0.42758357616, 0.30474420526, 0.065317777289, 5.6699425669e-3
-    // (REFERENCES §8a, computed there with scipy.special.wofz). Voigt profile normalisation:
-    // REFERENCES §8a (Armstrong 1967, from memory).
+    // (computed with SciPy's scipy.special.wofz). Voigt profile normalisation: Armstrong 1967
+    // (from memory).
     const step = 2 ** -12
     const centre = Math.round(667.3 / step) * step
     const alphaTarget = 8 * step * SQRT_LN2 // x = 1 at 8 grid steps from the centre

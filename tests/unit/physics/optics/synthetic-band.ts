@@ -3,9 +3,10 @@
  * plus a weaker hot band) and a 5-layer atmosphere from 1000 to 1 hPa.
  *
  * The numbers are representative, not a catalogue: band origin 667.38 cm⁻¹ and B = 0.39022 cm⁻¹
- * (REFERENCES §3b, from memory there), even J″ only so P/R lines are 4B ≈ 1.56 cm⁻¹ apart
- * (REFERENCES §3a nuclear-spin statistics), peak intensity 1e-19 cm/molecule, γ_air ≈ 0.07,
- * γ_self ≈ 0.09 cm⁻¹ atm⁻¹, n = 0.75 (REFERENCES §3d, from memory there), E″ up to ≈ 2000 cm⁻¹.
+ * (Rothman et al. 1992, JQSRT 48, 537; from memory), even J″ only so P/R lines are 4B ≈ 1.56 cm⁻¹
+ * apart (nuclear-spin statistics, Herzberg 1945, Infrared and Raman Spectra; from memory), peak
+ * intensity 1e-19 cm/molecule, γ_air ≈ 0.07, γ_self ≈ 0.09 cm⁻¹ atm⁻¹, n = 0.75 (from memory),
+ * E″ up to ≈ 2000 cm⁻¹.
  */
 import { C2_CM_K } from '../../../../shared/physics/constants'
 import { levelsToLayers } from '../../../../shared/physics/atmosphere'

@@ -14,8 +14,8 @@ import {
 import fixture from '../fixtures/faddeeva.json'
 import { expectRelativeClose } from '../../../support/expect-close'
 
-// REFERENCES §8a: w(x + iy) computed with scipy.special.wofz (agrees with Abramowitz & Stegun
-// Table 7.9 to its 6 decimals, from memory). Columns x, y, Re w, Im w.
+// w(x + iy) computed with SciPy's scipy.special.wofz (agrees with Abramowitz & Stegun Table 7.9
+// to its 6 decimals, from memory). Columns x, y, Re w, Im w.
 const REFERENCE_TABLE: readonly [number, number, number, number][] = [
   [0, 0, 1.0, 0],
   [0, 0.1, 0.89645697997, 0],
@@ -49,7 +49,7 @@ function maxErrors(algorithm: Algorithm, minY: number) {
 }
 
 describe('faddeeva (Weideman 1994, accurate)', () => {
-  it('when evaluated at the REFERENCES §8a points, returns the scipy values to 1e-9', () => {
+  it('when evaluated at the check points, returns the scipy values to 1e-9', () => {
     for (const [x, y, re, im] of REFERENCE_TABLE) {
       const w = faddeeva(x, y)
       // Table values have 11 significant digits: relative tolerance 1e-9 (components compared
@@ -104,7 +104,7 @@ describe('faddeeva (Weideman 1994, accurate)', () => {
 })
 
 describe('faddeevaHumlicek (Humlíček 1982, fast)', () => {
-  it('when evaluated at the REFERENCES §8a points, returns the scipy values to 1e-4', () => {
+  it('when evaluated at the check points, returns the scipy values to 1e-4', () => {
     for (const [x, y, re, im] of REFERENCE_TABLE) {
       const w = faddeevaHumlicek(x, y)
       expect(complexRelativeError(w, re, im), `w(${x}, ${y})`).toBeLessThan(1e-4)

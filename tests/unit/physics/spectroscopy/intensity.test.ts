@@ -32,9 +32,10 @@ describe('lineIntensityAtTemperature', () => {
     expect(lineIntensityAtTemperature(3.2e-19, 667.38, 1234.5, 296, constantQ)).toBe(3.2e-19)
   })
 
-  it('when ν = E″ = 667.38 cm⁻¹ and T = 220 K, returns the product of the REFERENCES §9 factors', () => {
-    // REFERENCES §9 (COMPUTED): exp(−c₂·667.38/T) = 0.012 720 (220 K), 0.039 009 (296 K).
-    // Boltzmann ratio 0.012720/0.039009; stimulated-emission ratio (1 − 0.012720)/(1 − 0.039009).
+  it('when ν = E″ = 667.38 cm⁻¹ and T = 220 K, returns the product of the hand-computed factors', () => {
+    // Computed by hand with CODATA 2018 c₂: exp(−c₂·667.38/T) = 0.012 720 (220 K), 0.039 009 (296
+    // K). Boltzmann ratio 0.012720/0.039009; stimulated-emission ratio (1 − 0.012720)/(1 −
+    // 0.039009).
     const expected = (0.01272 / 0.039009) * ((1 - 0.01272) / (1 - 0.039009))
     // The table factors have 5 significant digits: relative tolerance 1e-4.
     expectRelativeClose(
@@ -59,7 +60,7 @@ describe('lineIntensityAtTemperature', () => {
   it('when E″ is large and T low, returns the small positive value instead of 0/0', () => {
     // exp(−c₂E″/T) alone underflows for E″ = 6e4 cm⁻¹ at 100 K (exponent −863); the combined
     // exponent −c₂E″(1/T − 1/T_ref) = −571 does not. Small ν: stimulated factor → T_ref/T.
-    // c₂ = 1.438 776 877 cm K (CODATA 2018, REFERENCES §1).
+    // c₂ = 1.438 776 877 cm K (CODATA 2018, Tiesinga et al. 2021, Rev. Mod. Phys. 93, 025010).
     const s = lineIntensityAtTemperature(1, 1e-6, 60000, 100, constantQ)
     expect(s).toBeGreaterThan(0)
     const expectedLog = -1.438776877 * 60000 * (1 / 100 - 1 / 296) + Math.log(2.96)

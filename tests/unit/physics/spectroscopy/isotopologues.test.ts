@@ -28,7 +28,7 @@ function formulaMass(formula: string): number {
 
 describe('ISOTOPOLOGUES', () => {
   it('when molar masses are recomputed from atomic masses, returns the table values to 1e-7', () => {
-    // The table values (Gordon et al. 2022, REFERENCES §3a/§4) carry 6–8 significant digits.
+    // The table values (Gordon et al. 2022, JQSRT 277, 107949) carry 6–8 significant digits.
     expect(ISOTOPOLOGUES.length).toBe(12)
     for (const record of ISOTOPOLOGUES) {
       expectRelativeClose(record.molarMassGPerMol, formulaMass(record.formula), 1e-7, record.code)
@@ -41,7 +41,7 @@ describe('ISOTOPOLOGUES', () => {
       sums.set(record.moleculeId, (sums.get(record.moleculeId) ?? 0) + record.abundance)
     }
     for (const [molecule, sum] of sums) expect(sum, `molecule ${molecule}`).toBeLessThanOrEqual(1)
-    // CO2: the five listed isotopologues hold > 99.99 % (REFERENCES §3a abundances).
+    // CO2: the five listed isotopologues hold > 99.99 % (Gordon et al. 2022 abundances).
     expect(sums.get(2)).toBeGreaterThan(0.9999)
   })
 

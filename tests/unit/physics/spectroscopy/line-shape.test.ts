@@ -37,8 +37,8 @@ function areaWithLorentzTail(f: (offset: number) => number, width: number, gamma
   return area + tail
 }
 
-// Typical widths: CO2 at 667 cm⁻¹, 296 K, α_D = 6.20e-4 cm⁻¹ (REFERENCES §3d); γ from 1 atm
-// (0.07 cm⁻¹ atm⁻¹, REFERENCES §3d, from memory) down to 1e-4 atm.
+// Typical widths: CO2 at 667 cm⁻¹, 296 K, α_D = 6.20e-4 cm⁻¹ (computed by hand); γ from 1 atm
+// (0.07 cm⁻¹ atm⁻¹, from memory) down to 1e-4 atm.
 const ALPHA_D = 6.2e-4
 const GAMMAS = [0.07, 7e-3, 6.2e-4, 7e-5, 7e-6, 0]
 
@@ -124,7 +124,7 @@ describe('voigtProfile', () => {
   })
 
   it('when y = 1, returns the peak K(0, 1) √(ln2/π)/α_D', () => {
-    // K(0, 1) = 0.42758357616 (REFERENCES §8a, scipy.special.wofz); γ = α_D/√ln2 gives y = 1.
+    // K(0, 1) = 0.42758357616 (SciPy's scipy.special.wofz); γ = α_D/√ln2 gives y = 1.
     const gamma = ALPHA_D / Math.sqrt(Math.LN2)
     const peak = (0.42758357616 * Math.sqrt(Math.LN2 / Math.PI)) / ALPHA_D
     expectRelativeClose(voigtProfileAccurate(0, ALPHA_D, gamma), peak, 1e-10)

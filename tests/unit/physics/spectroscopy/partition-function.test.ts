@@ -15,13 +15,14 @@ import { expectRelativeClose } from '../../../support/expect-close'
 
 describe('vibrationalPartitionFunction', () => {
   it('when given the CO2 626 levels at 296 K, returns 1.0845', () => {
-    // REFERENCES §3a: Q_vib(296) = 1.0845 from the §3b levels (COMPUTED); 5 significant digits.
+    // Q_vib(296) = 1.0845, computed by hand from the CO2 626 levels (Rothman et al. 1992, JQSRT 48,
+    // 537; from memory); 5 significant digits.
     const q = vibrationalPartitionFunction(getIsotopologue(2, 1).vibrationalLevels, 296)
     expect(Math.abs(q - 1.0845)).toBeLessThan(5e-5)
   })
 
   it('when given one doubly degenerate level at 667.38 cm⁻¹ and 220 K, returns 1 + 0.025 44', () => {
-    // REFERENCES §9: g·exp(−c₂·667.38/220) = 0.025 44 (COMPUTED).
+    // g·exp(−c₂·667.38/220) = 0.025 44 (computed by hand, CODATA 2018 c₂).
     const q = vibrationalPartitionFunction([{ energyCm: 667.38, degeneracy: 2 }], 220)
     expect(Math.abs(q - 1.02544)).toBeLessThan(5e-6)
   })
@@ -29,7 +30,7 @@ describe('vibrationalPartitionFunction', () => {
 
 describe('approximatePartitionFunction', () => {
   it('when at 296 K, returns the tabulated Q(296) of every isotopologue', () => {
-    // Q(296) column of the Gordon et al. 2022 isotopologue table (REFERENCES §3a, §4).
+    // Q(296) column of the Gordon et al. 2022 isotopologue table (JQSRT 277, 107949).
     const expected: Record<string, number> = {
       '626': 286.09,
       '636': 576.64,
@@ -45,12 +46,14 @@ describe('approximatePartitionFunction', () => {
   })
 
   it('when CO2 626 at 150–350 K, returns the rigid-rotor × Q_vib ratio to 0.2 %', () => {
-    // REFERENCES §3a consistency check: Q_rot(even J) ≈ kT/(2hcB₀) + 1/3 (COMPUTED form) with
-    // B₀ = 0.390 218 9 cm⁻¹ (REFERENCES §3b, from memory), times Q_vib of the level list.
+    // Consistency check: Q_rot(even J) ≈ kT/(2hcB₀) + 1/6 (high-temperature rigid-rotor expansion
+    // Q = (kT/σhcB)(1 + hcB/3kT + …) with symmetry number σ = 2, Herzberg 1950 ch. III; from
+    // memory) with B₀ = 0.390 218 9 cm⁻¹ (Rothman et al. 1992, JQSRT 48, 537; from memory), times
+    // Q_vib of the level list.
     const record = getIsotopologue(2, 1)
     const q = approximatePartitionFunction(record)
     const rigidRotor = (t: number) =>
-      (t / C2_CM_K / (2 * 0.3902189) + 1 / 3) *
+      (t / C2_CM_K / (2 * 0.3902189) + 1 / 6) *
       vibrationalPartitionFunction(record.vibrationalLevels, t)
     for (const t of [150, 200, 220, 250, 350]) {
       expectRelativeClose(q(t) / q(296), rigidRotor(t) / rigidRotor(296), 2e-3, `${t} K`)

@@ -18,8 +18,8 @@ function expectRoundsTo(value: number, printed: number, significantDigits: numbe
   expect(Number(value.toPrecision(significantDigits)), `${value}`).toBe(printed)
 }
 
-const CO2_626_MOLAR_MASS = 43.98983 // Gordon et al. 2022 isotopologue table (REFERENCES §3a)
-const H2O_161_MOLAR_MASS = 18.010565 // Gordon et al. 2022 isotopologue table (REFERENCES §4)
+const CO2_626_MOLAR_MASS = 43.98983 // Gordon et al. 2022, JQSRT 277, 107949, isotopologue table
+const H2O_161_MOLAR_MASS = 18.010565 // Gordon et al. 2022, JQSRT 277, 107949, isotopologue table
 
 function line(overrides: Partial<SpectralLine>): SpectralLine {
   return {
@@ -39,13 +39,13 @@ function line(overrides: Partial<SpectralLine>): SpectralLine {
 
 describe('dopplerHalfWidthCm', () => {
   it('when CO2 at 667 cm⁻¹, returns 6.20e-4 cm⁻¹ at 296 K and 5.34e-4 cm⁻¹ at 220 K', () => {
-    // REFERENCES §3d (COMPUTED from α_D = (ν/c)√(2 ln2 kT/m)), 3 significant digits.
+    // Computed by hand from α_D = (ν/c)√(2 ln2 kT/m) (CODATA 2018), 3 significant digits.
     expectRoundsTo(dopplerHalfWidthCm(667, 296, CO2_626_MOLAR_MASS), 6.2e-4, 3)
     expectRoundsTo(dopplerHalfWidthCm(667, 220, CO2_626_MOLAR_MASS), 5.34e-4, 3)
   })
 
   it('when H2O at 1594.75 cm⁻¹ and 296 K, returns 2.32e-3 cm⁻¹', () => {
-    // REFERENCES §3d (COMPUTED), 3 significant digits.
+    // Computed by hand from the same formula, 3 significant digits.
     expectRoundsTo(dopplerHalfWidthCm(1594.75, 296, H2O_161_MOLAR_MASS), 2.32e-3, 3)
   })
 
@@ -62,7 +62,7 @@ describe('dopplerHalfWidthCm', () => {
     ])
     const out = new Float64Array(3)
     dopplerHalfWidths(table, 250, out)
-    // Molar masses: Gordon et al. 2022 table (636: 44.993185, REFERENCES §3a).
+    // Molar masses: Gordon et al. 2022, JQSRT 277, 107949, isotopologue table (636: 44.993185).
     expectRelativeClose(out[0], dopplerHalfWidthCm(600, 250, 44.993185), 1e-15)
     expectRelativeClose(out[1], dopplerHalfWidthCm(700, 250, CO2_626_MOLAR_MASS), 1e-15)
     expectRelativeClose(out[2], dopplerHalfWidthCm(1594.75, 250, H2O_161_MOLAR_MASS), 1e-15)

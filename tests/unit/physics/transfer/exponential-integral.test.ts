@@ -8,7 +8,8 @@ import fixture from '../fixtures/transfer-reference.json'
 import { expectRelClose } from './expect-close'
 
 describe('exponentialIntegralEn', () => {
-  // REFERENCES.md §8b (COMPUTED with mpmath, digits as printed there).
+  // Computed with mpmath (general-purpose reference library), rounded as printed; Abramowitz &
+  // Stegun Table 5.1 tabulates the same functions (from memory).
   const table: [number, number, number, number][] = [
     [0.01, 4.037929577, 0.949670538, 0.490276564],
     [0.1, 1.822923958, 0.722545022, 0.416291458],
@@ -18,7 +19,7 @@ describe('exponentialIntegralEn', () => {
     [5, 1.148296e-3, 9.96469e-4, 8.778009e-4],
   ]
   it.each(table)(
-    'when x = %f, returns the REFERENCES §8b E₁, E₂, E₃ to the printed digits',
+    'when x = %f, returns the mpmath E₁, E₂, E₃ to the printed digits',
     (x, e1, e2, e3) => {
       // The table is rounded to 9 decimal places (absolute 5e-10): relative tolerance 6e-10/value.
       expectRelClose(exponentialIntegralEn(1, x), e1, 6e-10 / e1, 'E1')
@@ -36,7 +37,7 @@ describe('exponentialIntegralEn', () => {
   })
 
   it('when x = 0, returns 1/(n − 1) for n ≥ 2 and throws for n ≤ 1', () => {
-    // A&S 5.1.23: Eₙ(0) = 1/(n − 1); REFERENCES §8b: E₃(0) = 1/2, E₂(0) = 1.
+    // A&S 5.1.23: Eₙ(0) = 1/(n − 1), so E₃(0) = 1/2, E₂(0) = 1.
     expect(exponentialIntegralEn(2, 0)).toBe(1)
     expect(exponentialIntegralEn(3, 0)).toBe(0.5)
     expect(exponentialIntegralEn(4, 0)).toBeCloseTo(1 / 3, 15)
@@ -63,8 +64,8 @@ describe('exponentialIntegralEn', () => {
 })
 
 describe('fluxTransmittance', () => {
-  it('when τ is given, returns 2E₃(τ) as tabulated in REFERENCES §8b (5 decimals, rel 1e-4)', () => {
-    // REFERENCES.md §8b flux transmittance column (COMPUTED, 5 digits).
+  it('when τ is given, returns 2E₃(τ) as tabulated from mpmath (5 decimals, rel 1e-4)', () => {
+    // Flux transmittance 2E₃(τ) computed with mpmath (5 digits).
     const table: [number, number][] = [
       [0.01, 0.98055],
       [0.1, 0.83258],

@@ -10,7 +10,8 @@ import fixture from '../fixtures/transfer-reference.json'
 import { expectRelClose } from './expect-close'
 
 describe('gaussLegendreUnitInterval', () => {
-  // REFERENCES.md §8c (COMPUTED), 8 significant digits.
+  // Gauss–Legendre rule mapped to [0, 1], computed (8 significant digits); the [−1, 1] rule is
+  // tabulated in Abramowitz & Stegun Table 25.4 (from memory).
   const table: [number, number[], number[]][] = [
     [1, [0.5], [1]],
     [2, [0.21132487, 0.78867513], [0.5, 0.5]],
@@ -21,16 +22,13 @@ describe('gaussLegendreUnitInterval', () => {
       [0.17392742, 0.32607258, 0.32607258, 0.17392742],
     ],
   ]
-  it.each(table)(
-    'when n = %i, returns the REFERENCES §8c nodes and weights (rel 1e-7)',
-    (n, x, w) => {
-      const rule = gaussLegendreUnitInterval(n)
-      for (let i = 0; i < n; i++) {
-        expectRelClose(rule.nodes[i], x[i], 1e-7, `node ${i}`)
-        expectRelClose(rule.weights[i], w[i], 1e-7, `weight ${i}`)
-      }
-    },
-  )
+  it.each(table)('when n = %i, returns the tabulated nodes and weights (rel 1e-7)', (n, x, w) => {
+    const rule = gaussLegendreUnitInterval(n)
+    for (let i = 0; i < n; i++) {
+      expectRelClose(rule.nodes[i], x[i], 1e-7, `node ${i}`)
+      expectRelClose(rule.weights[i], w[i], 1e-7, `weight ${i}`)
+    }
+  })
 
   it('when n = 1…8, returns the SciPy roots_legendre nodes and weights (rel 1e-13)', () => {
     // SciPy 1.10 special.roots_legendre mapped to [0, 1] (fixture transfer-reference.json).
@@ -58,22 +56,19 @@ describe('gaussLegendreUnitInterval', () => {
 })
 
 describe('gaussJacobiMuUnitInterval', () => {
-  // REFERENCES.md §8c (COMPUTED); weights there are normalised to sum 1 (= 2 h_i).
+  // Gauss–Jacobi rule for weight μ on [0, 1], computed; weights normalised to sum 1 (= 2 h_i).
   const table: [number, number[], number[]][] = [
     [1, [2 / 3], [1]],
     [2, [0.35505103, 0.84494897], [0.36391724, 0.63608276]],
     [3, [0.21234054, 0.59053314, 0.91141204], [0.13965396, 0.45848221, 0.40186383]],
   ]
-  it.each(table)(
-    'when n = %i, returns the REFERENCES §8c nodes and weights (rel 1e-7)',
-    (n, x, w) => {
-      const rule = gaussJacobiMuUnitInterval(n)
-      for (let i = 0; i < n; i++) {
-        expectRelClose(rule.nodes[i], x[i], 1e-7, `node ${i}`)
-        expectRelClose(2 * rule.weights[i], w[i], 1e-7, `weight ${i}`)
-      }
-    },
-  )
+  it.each(table)('when n = %i, returns the tabulated nodes and weights (rel 1e-7)', (n, x, w) => {
+    const rule = gaussJacobiMuUnitInterval(n)
+    for (let i = 0; i < n; i++) {
+      expectRelClose(rule.nodes[i], x[i], 1e-7, `node ${i}`)
+      expectRelClose(2 * rule.weights[i], w[i], 1e-7, `weight ${i}`)
+    }
+  })
 
   it('when n = 1…8, returns the SciPy roots_jacobi(n, 0, 1) nodes and weights (rel 1e-13)', () => {
     // SciPy 1.10 special.roots_jacobi, mapped to [0, 1], weights normalised to sum 1.
@@ -102,8 +97,8 @@ describe('gaussJacobiMuUnitInterval', () => {
 
 describe('angleQuadrature', () => {
   it('when the radiance is isotropic, every scheme returns F = πB (rel 1e-14)', () => {
-    // REFERENCES.md §8c: "with I = B, every scheme must return F = πB exactly".
-    const b = 0.130906 // any radiance; B(667 cm⁻¹, 288 K), REFERENCES §1 (COMPUTED)
+    // With I = B every scheme must return F = πB exactly (2π∫₀¹ B μ dμ = πB).
+    const b = 0.130906 // any radiance; B(667 cm⁻¹, 288 K), computed (CODATA 2018)
     const specs = [
       ...Array.from({ length: 8 }, (_, i) => ({ kind: 'gauss-legendre' as const, nodes: i + 1 })),
       ...Array.from({ length: 8 }, (_, i) => ({ kind: 'gauss-jacobi' as const, nodes: i + 1 })),
@@ -118,7 +113,7 @@ describe('angleQuadrature', () => {
   })
 
   it('when diffusivity is chosen, returns one stream at μ = 1/1.66 with weight 1', () => {
-    // Diffusivity factor 1.66, Elsasser 1942 (from memory; REFERENCES §8b).
+    // Diffusivity factor 1.66, Elsasser 1942, Harvard Meteorological Studies No. 6 (from memory).
     const q = angleQuadrature({ kind: 'diffusivity' })
     expect(DIFFUSIVITY_FACTOR).toBe(1.66)
     expect(q.mu).toHaveLength(1)

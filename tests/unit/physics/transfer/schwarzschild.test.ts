@@ -84,7 +84,7 @@ describe('solveSchwarzschild — isothermal and empty atmospheres', () => {
   )
 
   it('when the grid spans 1–4000 cm⁻¹ at 288 K over an isothermal column, returns OLR = σT⁴ (rel 1e-5)', () => {
-    // σ·288⁴ = 390.11 W m⁻² (REFERENCES §1, COMPUTED with CODATA 2018 σ). Tolerance 1e-5 covers
+    // σ·288⁴ = 390.11 W m⁻² (computed with CODATA 2018 σ). Tolerance 1e-5 covers
     // the trapezoid error at 1 cm⁻¹ spacing and the tail beyond 4000 cm⁻¹ (≈3e-6 relative).
     const nu = uniformGrid(1, 1, 4000)
     const res = solveSchwarzschild({
@@ -96,7 +96,7 @@ describe('solveSchwarzschild — isothermal and empty atmospheres', () => {
       quadrature: GL4,
     })
     expectRelClose(res.fluxUpWPerM2[3], STEFAN_BOLTZMANN_W_PER_M2_K4 * 288 ** 4, 1e-5)
-    expectRelClose(res.fluxUpWPerM2[3], 390.11, 2e-5, 'REFERENCES §1 390.11')
+    expectRelClose(res.fluxUpWPerM2[3], 390.11, 2e-5, 'σ·288⁴ = 390.11')
   })
 
   it('when the atmosphere is empty (τ = 0), returns OLR = surface emission and no downward flux', () => {
@@ -162,7 +162,7 @@ describe('solveSchwarzschild — grey isothermal slab', () => {
   )
 
   it('when the slab is cold (B ≈ 0), flux transmittance converges to 2E₃(τ) with Gauss nodes', () => {
-    // Slab flux transmittance 2E₃(τ) (REFERENCES §8b; E₃ from mpmath fixture via the tested
+    // Slab flux transmittance 2E₃(τ) (common practice; E₃ from mpmath fixture via the tested
     // exponentialIntegralEn). A 1 K slab emits B(800 cm⁻¹, 1 K) = 0 in double precision.
     const tauSet = [0.01, 0.1, 0.5, 1, 2]
     const grid = Float64Array.from(tauSet, () => 800)
@@ -191,11 +191,11 @@ describe('solveSchwarzschild — grey isothermal slab', () => {
     // Convergence: the worst relative error falls by > 10× from 2 to 8 nodes and is < 1e-4 at 8.
     expect(errors[7], `errors ${errors.join(', ')}`).toBeLessThan(1e-4)
     expect(errors[7] * 10, `errors ${errors.join(', ')}`).toBeLessThan(errors[1])
-    // REFERENCES §8b table of 2E₃(τ) (5 digits): 8-node Gauss–Legendre reproduces it.
+    // Table of 2E₃(τ) computed with mpmath (5 digits): 8-node Gauss–Legendre reproduces it.
     const tr8 = run(angleQuadrature({ kind: 'gauss-legendre', nodes: 8 }))
     const table = [0.98055, 0.83258, 0.44321, 0.21938, 0.06027]
     table.forEach((v, j) => expectRelClose(tr8[j], v, 1e-4, `τ=${tauSet[j]}`))
-    // Diffusivity: exactly e^{−1.66τ} (REFERENCES §8b column e^{−1.66τ}, 5 digits).
+    // Diffusivity: exactly e^{−1.66τ} (computed, 5 digits).
     const trD = run(angleQuadrature({ kind: 'diffusivity' }))
     const tableD = [0.98354, 0.84705, 0.43605, 0.19014, 0.03615]
     tableD.forEach((v, j) => expectRelClose(trD[j], v, 2e-4, `diffusivity τ=${tauSet[j]}`))

@@ -26,8 +26,8 @@ function expectRelClose(actual: number, expected: number, tol: number, label = '
   ).toBeLessThanOrEqual(tol)
 }
 
-// Saturation vapour pressure over water, REFERENCES.md §10, Murphy & Koop 2005 column (COMPUTED,
-// 5 significant digits, so ≤ 4e-5 relative): 0 °C 6.1121 hPa, 20 °C 23.394 hPa, −20 °C 1.2550 hPa.
+// Saturation vapour pressure over water, computed by hand from Murphy & Koop 2005, QJRMS 131, 1539
+// (5 significant digits, so ≤ 4e-5 relative): 0 °C 6.1121 hPa, 20 °C 23.394 hPa, −20 °C 1.2550 hPa.
 const E_W_0C_PA = 611.21
 const E_W_20C_PA = 2339.4
 const E_W_MINUS20C_PA = 125.5
