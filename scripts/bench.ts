@@ -8,6 +8,9 @@
 // and grid points per second of wall time, Voigt evaluations, slowest chunk. The table goes to
 // stdout and everything to bench-results/bench-<date>.json (git-ignored). --quick runs smaller
 // versions of every case (a few minutes in all).
+// Case F (scripts/bench/api-latency-case.ts) measures API latency instead: 50 signed-in clients
+// against list and detail endpoints of the real app on a throwaway database; its rows give the
+// server's CPU and memory, and the latency percentiles, requests/s and failures in the notes.
 import { mkdirSync, writeFileSync } from 'node:fs'
 import { cpus, totalmem } from 'node:os'
 import { dirname, join } from 'node:path'
@@ -15,6 +18,7 @@ import { fileURLToPath } from 'node:url'
 import { ENGINE_VERSION } from '../shared/version'
 import { caseA, caseB, caseC, caseD, type BenchRow, type CaseOptions } from './bench/cases'
 import { loadBuiltInCatalogue } from './bench/inputs'
+import { caseF } from './bench/api-latency-case'
 import { caseE } from './bench/parallel-case'
 
 const ROOT = join(dirname(fileURLToPath(import.meta.url)), '..')
@@ -22,10 +26,10 @@ const ROOT = join(dirname(fileURLToPath(import.meta.url)), '..')
 function parseArguments(argv: string[]): { quick: boolean; cases: string[] } {
   const quick = argv.includes('--quick')
   const index = argv.indexOf('--cases')
-  const cases =
-    index >= 0 && argv[index + 1] ? argv[index + 1].toUpperCase().split(',') : ['A', 'B', 'C', 'D', 'E']
+  const all = ['A', 'B', 'C', 'D', 'E', 'F']
+  const cases = index >= 0 && argv[index + 1] ? argv[index + 1].toUpperCase().split(',') : all
   for (const name of cases) {
-    if (!['A', 'B', 'C', 'D', 'E'].includes(name)) throw new Error(`unknown case '${name}' (A, B, C, D, E)`)
+    if (!all.includes(name)) throw new Error(`unknown case '${name}' (${all.join(', ')})`)
   }
   return { quick, cases }
 }
@@ -84,6 +88,7 @@ async function main(): Promise<void> {
     C: caseC,
     D: caseD,
     E: caseE,
+    F: caseF,
   }
   const rows: BenchRow[] = []
   for (const name of cases) {

@@ -92,14 +92,10 @@ export async function createRun(sequelize: Sequelize, queue: RunQueue, actor: Ac
 }
 
 /**
- * The part of the frozen inputs a summary shows. A list reads only this, not the profile snapshot
- * (~15 kB of levels a run), which would otherwise be sent and parsed for every row.
+ * The frozen inputs without the profile snapshot (~15 kB of levels a run): all a summary shows.
+ * Lists read this instead of the whole column, which would be sent and parsed for every row.
  */
-const SUMMARY_INPUTS = literal(
-  `jsonb_build_object('profile', jsonb_build_object('name', "Run"."inputs" #> '{profile,name}'), ` +
-    `'mixture', jsonb_build_object('name', "Run"."inputs" #> '{mixture,name}'), ` +
-    `'settings', jsonb_build_object('startCm', "Run"."inputs" #> '{settings,startCm}', 'endCm', "Run"."inputs" #> '{settings,endCm}'))`,
-)
+const INPUTS_WITHOUT_SNAPSHOT = literal(`"Run"."inputs" #- '{profile,snapshot}'`)
 
 export async function listRuns(actor: Actor, query: RunListQuery): Promise<Page<RunSummary>> {
   const where: WhereOptions<Run> = {}
@@ -111,7 +107,7 @@ export async function listRuns(actor: Actor, query: RunListQuery): Promise<Page<
     Run.count({ where }),
     Run.findAll({
       where,
-      attributes: { exclude: ['inputs'], include: [[SUMMARY_INPUTS, 'inputs']] },
+      attributes: { exclude: ['inputs'], include: [[INPUTS_WITHOUT_SNAPSHOT, 'inputs']] },
       include: [
         { model: User, as: 'owner', attributes: ['displayName'] },
         { model: RunResult, as: 'result', attributes: ['summary'] },
@@ -145,7 +141,10 @@ export async function getRun(id: number): Promise<RunDetail> {
   ])
   if (!run) throw AppError.notFound('Run')
   const result = (run as unknown as { result?: RunResult }).result
-  return { ...toSummary(run, (result?.summary?.olrWPerM2 as number | undefined) ?? null, signOffs.get(id)), inputs: run.inputs }
+  return {
+    ...toSummary(run, (result?.summary?.olrWPerM2 as number | undefined) ?? null, signOffs.get(id)),
+    inputs: run.inputs,
+  }
 }
 
 /** Progress only, cheap enough to poll every second. */
