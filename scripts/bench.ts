@@ -11,6 +11,9 @@
 // Case F (scripts/bench/api-latency-case.ts) measures API latency instead: 50 signed-in clients
 // against list and detail endpoints of the real app on a throwaway database; its rows give the
 // server's CPU and memory, and the latency percentiles, requests/s and failures in the notes.
+// Case G (scripts/bench/queue-case.ts) runs case A through the run queue on one and on two
+// standalone worker processes; case H (scripts/bench/client-spectrum-case.ts) measures the run
+// page in Chromium with 200 000-bin spectra and a 500 000-point full-resolution window.
 import { mkdirSync, writeFileSync } from 'node:fs'
 import { cpus, totalmem } from 'node:os'
 import { dirname, join } from 'node:path'
@@ -20,13 +23,15 @@ import { caseA, caseB, caseC, caseD, type BenchRow, type CaseOptions } from './b
 import { loadBuiltInCatalogue } from './bench/inputs'
 import { caseF } from './bench/api-latency-case'
 import { caseE } from './bench/parallel-case'
+import { caseG } from './bench/queue-case'
+import { caseH } from './bench/client-spectrum-case'
 
 const ROOT = join(dirname(fileURLToPath(import.meta.url)), '..')
 
 function parseArguments(argv: string[]): { quick: boolean; cases: string[] } {
   const quick = argv.includes('--quick')
   const index = argv.indexOf('--cases')
-  const all = ['A', 'B', 'C', 'D', 'E', 'F']
+  const all = ['A', 'B', 'C', 'D', 'E', 'F', 'G', 'H']
   const cases = index >= 0 && argv[index + 1] ? argv[index + 1].toUpperCase().split(',') : all
   for (const name of cases) {
     if (!all.includes(name)) throw new Error(`unknown case '${name}' (${all.join(', ')})`)
@@ -89,6 +94,8 @@ async function main(): Promise<void> {
     D: caseD,
     E: caseE,
     F: caseF,
+    G: caseG,
+    H: caseH,
   }
   const rows: BenchRow[] = []
   for (const name of cases) {

@@ -2,7 +2,6 @@ import { existsSync } from 'node:fs'
 import { join, resolve } from 'node:path'
 import express, { type Express } from 'express'
 import session from 'express-session'
-import connectPgSimple from 'connect-pg-simple'
 import helmet from 'helmet'
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit'
 import { csrfSync } from 'csrf-sync'
@@ -10,6 +9,7 @@ import type pg from 'pg'
 import type { Sequelize } from 'sequelize'
 import type { AppConfig } from './config'
 import { createPassport } from './auth/passport'
+import { ThrottledPgSessionStore } from './auth/session-store'
 import type { Logger } from './logger'
 import { apiNotFound, errorHandler } from './middlewares/error-handler'
 import { authRoutes } from './routes/auth.routes'
@@ -49,11 +49,10 @@ export function createApp({ config, sequelize, sessionPool, logger, clientDistDi
   )
   app.use(express.json({ limit: '2mb' }))
 
-  const PgStore = connectPgSimple(session)
   app.use(
     session({
       name: SESSION_COOKIE,
-      store: new PgStore({ pool: sessionPool, tableName: 'session', pruneSessionInterval: 15 * 60 }),
+      store: new ThrottledPgSessionStore(sessionPool),
       secret: config.sessionSecret,
       resave: false,
       saveUninitialized: false,

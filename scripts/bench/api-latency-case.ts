@@ -5,16 +5,15 @@
 // child process on an ephemeral loopback port, so the load generator never shares its event loop.
 // 50 clients, each signed in with its own session, hit one endpoint at a time with autocannon;
 // latency percentiles come from every response's own time, since autocannon reports no p95.
-import { execFileSync, fork, type ChildProcess } from 'node:child_process'
+import { fork, type ChildProcess } from 'node:child_process'
 import { randomBytes } from 'node:crypto'
 import { existsSync, readdirSync, readFileSync } from 'node:fs'
 import { Agent, get as httpGet, type Server, type ServerResponse } from 'node:http'
 import type { AddressInfo } from 'node:net'
 import { loadavg } from 'node:os'
-import { dirname, join } from 'node:path'
+import { join } from 'node:path'
 import { fileURLToPath } from 'node:url'
 import autocannon from 'autocannon'
-import pg from 'pg'
 import type { Sequelize } from 'sequelize'
 import type { RadiationResult } from '../../shared/physics/engine/merge'
 import { planChunks, prepareComputation } from '../../shared/physics/engine/prepare'
@@ -30,9 +29,9 @@ import { migrateUp } from '../../server/migrator'
 import { GasMixture, initModels, Profile, Run, RunResult, User } from '../../server/models/index'
 import { serialiseResult } from '../../server/runs/finalize-run'
 import { runInputHash } from '../../server/runs/run-inputs'
+import { createBenchDatabase } from './bench-database'
 import type { BenchRow, CaseOptions } from './cases'
 
-const ROOT = join(dirname(fileURLToPath(import.meta.url)), '..', '..')
 const SERVE_FLAG = '--serve-api-for-bench'
 const BENCH_PASSWORD = 'bench-password-2026'
 const CONNECTIONS = 50
@@ -159,60 +158,6 @@ function startServer(databaseUrl: string): Promise<ServerHandle> {
       clearTimeout(timer)
     },
   }))
-}
-
-// ---- the database ----
-
-interface BenchDatabase {
-  url: string
-  /** The temporary cluster's folder, when this benchmark started one. */
-  clusterDir?: string
-  drop(): Promise<void>
-}
-
-/** A fresh database on DATABASE_URL's cluster, or on a temporary cluster that is removed after. */
-async function createBenchDatabase(log: (line: string) => void): Promise<BenchDatabase> {
-  let adminUrl = process.env.DATABASE_URL
-  let clusterDir: string | undefined
-  if (!adminUrl) {
-    const out = execFileSync('bash', [join(ROOT, 'scripts/pg-temp.sh'), 'start'], {
-      encoding: 'utf8',
-    })
-    const vars = Object.fromEntries(
-      [...out.matchAll(/export (\w+)=(\S+)/g)].map((m) => [m[1], m[2]]),
-    )
-    adminUrl = vars.TAULINE_TEST_PG_URL
-    clusterDir = vars.TAULINE_TEST_PG_DIR
-    log(`    temporary PostgreSQL in ${clusterDir}`)
-  }
-  const stopCluster = () => {
-    if (clusterDir) execFileSync('bash', [join(ROOT, 'scripts/pg-temp.sh'), 'stop', clusterDir])
-  }
-  const name = `tauline_bench_${randomBytes(5).toString('hex')}`
-  const admin = new pg.Client({ connectionString: adminUrl })
-  try {
-    await admin.connect()
-    await admin.query(`CREATE DATABASE ${name}`)
-  } catch (err) {
-    stopCluster()
-    throw err
-  } finally {
-    await admin.end()
-  }
-  return {
-    url: adminUrl.replace(/\/[^/]*$/, `/${name}`),
-    clusterDir,
-    drop: async () => {
-      try {
-        const c = new pg.Client({ connectionString: adminUrl })
-        await c.connect()
-        await c.query(`DROP DATABASE IF EXISTS ${name} WITH (FORCE)`)
-        await c.end()
-      } finally {
-        stopCluster()
-      }
-    },
-  }
 }
 
 /** Deterministic pseudo-random numbers, so every bench stores the same rows. */

@@ -22,9 +22,23 @@ export async function authenticate(email: string, password: string): Promise<Use
   return user
 }
 
+/**
+ * Every signed-in request needs its user; remembering it for a few seconds spares one query per
+ * request. A change made here (updateUser) is seen at once; one made by another server process
+ * within ACTIVE_USER_TTL_MS.
+ */
+const ACTIVE_USER_TTL_MS = 5_000
+const activeUsers = new Map<number, { user: User | null; atMs: number }>()
+
 export async function findActiveUser(id: number): Promise<User | null> {
-  const user = await User.findByPk(id)
-  return user && user.active ? user : null
+  const now = Date.now()
+  const hit = activeUsers.get(id)
+  if (hit && now - hit.atMs < ACTIVE_USER_TTL_MS) return hit.user
+  const found = await User.findByPk(id)
+  const user = found && found.active ? found : null
+  if (activeUsers.size > 10_000) activeUsers.clear()
+  activeUsers.set(id, { user, atMs: now })
+  return user
 }
 
 export async function listUsers(): Promise<PublicUser[]> {
@@ -61,5 +75,6 @@ export async function updateUser(actorId: number, id: number, input: UpdateUserI
   if (input.role !== undefined) user.role = input.role
   if (input.active !== undefined) user.active = input.active
   await user.save()
+  activeUsers.delete(id)
   return user.toPublic()
 }

@@ -69,8 +69,33 @@ export function fetchRunResults(id: number): Promise<RunResults> {
   return http.get<RunResults>(`/runs/${id}/results`)
 }
 
+/**
+ * The full-resolution window of a run: every point of the calculation's own grid between startCm
+ * and endCm (ascending, not uniform: fine near line centres, coarse between lines).
+ */
+export interface RunResultsDetail {
+  runId: number
+  inputHash: string
+  engineVersion: string
+  startCm: number
+  endCm: number
+  pointCount: number
+  wavenumberCm: number[]
+  olrSpectral: (number | null)[]
+  surfaceDownSpectral: (number | null)[]
+  toaNadirRadiance: (number | null)[]
+  toaBrightnessTemperatureK: (number | null)[]
+  surfaceZenithRadiance: (number | null)[]
+  columnTransmittance: (number | null)[]
+}
+
+/** The full-resolution window of a run that asked for one (ApiError 404 otherwise). */
+export function fetchRunResultsDetail(id: number): Promise<RunResultsDetail> {
+  return http.get<RunResultsDetail>(`/runs/${id}/results/detail`)
+}
+
 /** Link of a server-side CSV table of a run's results. */
-export function runCsvUrl(id: number, table: 'spectrum' | 'levels' | 'layers'): string {
+export function runCsvUrl(id: number, table: 'spectrum' | 'levels' | 'layers' | 'detail'): string {
   return `/api/runs/${id}/results.csv?table=${table}`
 }
 
