@@ -17,6 +17,9 @@ export function createChunkPool(threads = availableParallelism()): ChunkPool {
     minThreads: 1,
     maxThreads: Math.max(1, threads),
     idleTimeout: 60_000,
+    // A chunk allocates many short-lived objects; a larger young generation than a worker thread's
+    // default means fewer scavenges (≈ 5–10 % faster per chunk, docs/PERFORMANCE.md).
+    resourceLimits: { maxYoungGenerationSizeMb: 256 },
   })
   return {
     run: (task) => pool.run(task) as Promise<ChunkTaskResult>,
