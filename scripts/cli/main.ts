@@ -1,5 +1,6 @@
 // tauline — command-line access to the Tauline engine. See README "Command line".
 import { CliError } from './args'
+import { benchCommand, benchHelp } from './bench-command'
 import { catalogueCommand, catalogueHelp } from './catalogue-command'
 import { computeCommand, computeHelp } from './compute-command'
 import { forcingCommand, forcingHelp } from './forcing-command'
@@ -12,6 +13,7 @@ const commands: Record<string, { run: (argv: string[]) => void | Promise<void>; 
   forcing: { run: forcingCommand, help: forcingHelp },
   run: { run: runCommand, help: runHelp },
   catalogue: { run: catalogueCommand, help: catalogueHelp },
+  bench: { run: benchCommand, help: benchHelp },
 }
 
 const usage = `Usage: tauline <command> [options]   (add --json for machine-readable output)

@@ -6,10 +6,13 @@ import { use, type ComposeOption } from 'echarts/core'
 import { CanvasRenderer } from 'echarts/renderers'
 import { LineChart, type LineSeriesOption } from 'echarts/charts'
 import {
+  DataZoomInsideComponent,
+  DataZoomSliderComponent,
   GridComponent,
   LegendComponent,
   MarkLineComponent,
   TooltipComponent,
+  type DataZoomComponentOption,
   type GridComponentOption,
   type LegendComponentOption,
   type MarkLineComponentOption,
@@ -19,6 +22,8 @@ import {
 use([
   CanvasRenderer,
   LineChart,
+  DataZoomInsideComponent,
+  DataZoomSliderComponent,
   GridComponent,
   LegendComponent,
   MarkLineComponent,
@@ -28,10 +33,11 @@ use([
 /** The option type of every chart in Tauline (only the registered series and components). */
 export type ChartOption = ComposeOption<
   | LineSeriesOption
+  | DataZoomComponentOption
   | GridComponentOption
   | LegendComponentOption
   | MarkLineComponentOption
   | TooltipComponentOption
 >
 
-export type { LineSeriesOption }
+export type { DataZoomComponentOption, LineSeriesOption }
