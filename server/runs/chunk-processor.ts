@@ -33,6 +33,26 @@ export async function failRun(sequelize: Sequelize, runId: number, reason: strin
   })
 }
 
+/** Columns of a run a chunk job reads on every chunk; the frozen inputs are read once per run. */
+const RUN_STATE_COLUMNS = ['id', 'status', 'inputHash', 'chunksDone', 'chunkCount', 'computeMs', 'startedAt', 'finishedAt', 'error'] as const
+
+// A run's inputs never change after submission (the hash covers them), so a worker keeps the last
+// few instead of reading and parsing the profile snapshot again for every chunk.
+const inputsByRunId = new Map<number, Run['inputs']>()
+const MAX_CACHED_INPUTS = 8
+
+async function runInputsOf(runId: number): Promise<Run['inputs'] | null> {
+  let inputs = inputsByRunId.get(runId)
+  if (!inputs) {
+    const row = await Run.findByPk(runId, { attributes: ['id', 'inputs'] })
+    if (!row) return null
+    inputs = row.inputs
+    inputsByRunId.set(runId, inputs)
+    if (inputsByRunId.size > MAX_CACHED_INPUTS) inputsByRunId.delete(inputsByRunId.keys().next().value!)
+  }
+  return inputs
+}
+
 /**
  * Handles one chunk job. Idempotent: a chunk already done is never counted twice, and a chunk of
  * a cancelled or failed run is skipped. Throws (so the queue retries) only for errors that may
@@ -40,8 +60,10 @@ export async function failRun(sequelize: Sequelize, runId: number, reason: strin
  */
 export async function processChunkJob(deps: ChunkProcessorDeps, data: ChunkJobData, job: ChunkJobMeta): Promise<void> {
   const { sequelize, pool, logger, workerId } = deps
-  const run = await Run.findByPk(data.runId)
+  const run = await Run.findByPk(data.runId, { attributes: [...RUN_STATE_COLUMNS] })
   if (!run || run.status === 'cancelled' || run.status === 'failed' || run.status === 'succeeded') return
+  const inputs = await runInputsOf(run.id)
+  if (!inputs) return
   const chunk = await RunChunk.findOne({ where: { runId: run.id, chunkIndex: data.chunkIndex } })
   if (!chunk || chunk.status === 'done') return
 
@@ -55,7 +77,7 @@ export async function processChunkJob(deps: ChunkProcessorDeps, data: ChunkJobDa
 
   let outcome
   try {
-    outcome = await pool.run({ inputHash: run.inputHash, inputs: run.inputs, chunkIndex: data.chunkIndex, database: workerDatabaseOf(sequelize) })
+    outcome = await pool.run({ inputHash: run.inputHash, inputs, chunkIndex: data.chunkIndex, database: workerDatabaseOf(sequelize) })
   } catch (err) {
     const reason = `chunk ${data.chunkIndex} (${chunk.startCm}–${chunk.endCm} cm⁻¹) failed on ${workerId}: ${(err as Error).message}`
     await RunChunk.update({ status: 'failed', error: reason }, { where: { id: chunk.id } })
@@ -75,7 +97,7 @@ export async function processChunkJob(deps: ChunkProcessorDeps, data: ChunkJobDa
 
   const stored = encodeChunkResult(outcome.result)
   await sequelize.transaction(async (tx) => {
-    const locked = await Run.findByPk(run.id, { transaction: tx, lock: tx.LOCK.UPDATE })
+    const locked = await Run.findByPk(run.id, { attributes: [...RUN_STATE_COLUMNS], transaction: tx, lock: tx.LOCK.UPDATE })
     if (!locked || locked.status !== 'running') return
     const [updated] = await RunChunk.update(
       { status: 'done', result: stored, computeMs: outcome.computeMs, finishedAt: new Date(), error: null },
@@ -85,7 +107,7 @@ export async function processChunkJob(deps: ChunkProcessorDeps, data: ChunkJobDa
     locked.chunksDone += 1
     locked.computeMs += outcome.computeMs
     await locked.save({ transaction: tx })
-    if (locked.chunksDone === locked.chunkCount) await finalizeRun(locked, tx)
+    if (locked.chunksDone === locked.chunkCount) await finalizeRun(locked, inputs, tx)
   })
 }
 

@@ -70,10 +70,10 @@ function serialiseDetail(r: RadiationResult): Record<string, unknown> | null {
 }
 
 /** Merges every chunk of a finished run (in chunk order) and stores the results, inside `tx`. */
-export async function finalizeRun(run: Run, tx: Transaction): Promise<void> {
+export async function finalizeRun(run: Run, inputs: Run['inputs'], tx: Transaction): Promise<void> {
   const chunks = await RunChunk.findAll({ where: { runId: run.id }, order: [['chunkIndex', 'ASC']], transaction: tx })
   // Merging needs the levels and the chunk plan, not the lines.
-  const prepared = prepareComputation(run.inputs.profile.snapshot, toLineTable([]), run.inputs.settings)
+  const prepared = prepareComputation(inputs.profile.snapshot, toLineTable([]), inputs.settings)
   const merged = mergeChunkResults(prepared, chunks.map((c) => decodeChunkResult(c.result as StoredChunkResult)))
   const { summary, data, detail } = serialiseResult(merged)
   await RunResult.create({ runId: run.id, summary, data, detail }, { transaction: tx })

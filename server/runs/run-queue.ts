@@ -23,7 +23,8 @@ export interface RunQueueOptions {
 
 export interface RunQueue {
   boss: PgBoss
-  enqueueChunk(data: ChunkJobData): Promise<string>
+  /** Queues the chunk jobs of a run in one insert, under the given job ids. */
+  enqueueChunks(jobs: { jobId: string; data: ChunkJobData }[]): Promise<void>
   cancelJobs(jobIds: string[]): Promise<void>
   stop(): Promise<void>
 }
@@ -47,10 +48,11 @@ export async function createRunQueue(options: RunQueueOptions): Promise<RunQueue
 
   return {
     boss,
-    async enqueueChunk(data) {
-      const id = await boss.send(CHUNK_QUEUE, data, { retryLimit, retryDelay: 1, expireInSeconds })
-      if (!id) throw new Error(`could not queue chunk ${data.chunkIndex} of run ${data.runId}`)
-      return id
+    async enqueueChunks(jobs) {
+      if (jobs.length === 0) return
+      await boss.insert(
+        jobs.map((j) => ({ id: j.jobId, name: CHUNK_QUEUE, data: j.data, retryLimit, retryDelay: 1, expireInSeconds })),
+      )
     },
     async cancelJobs(jobIds) {
       if (jobIds.length > 0) await boss.cancel(CHUNK_QUEUE, jobIds)

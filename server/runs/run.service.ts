@@ -1,3 +1,4 @@
+import { randomUUID } from 'node:crypto'
 import { literal, Op, type Sequelize, type WhereOptions } from 'sequelize'
 import { planChunks } from '../../shared/physics/engine/prepare'
 import type { Page } from '../../shared/schemas/paging'
@@ -47,6 +48,9 @@ export async function createRun(sequelize: Sequelize, queue: RunQueue, actor: Ac
   const { inputs, warnings } = await snapshotRunInputs(input)
   const chunks = planChunks(inputs.settings)
   const name = input.name?.trim() || `${inputs.profile.name}${inputs.mixture ? ` · ${inputs.mixture.name}` : ''} · ${inputs.settings.startCm}–${inputs.settings.endCm} cm⁻¹`
+  // Job ids are chosen here so the chunk rows carry them from the start and every job is queued
+  // in one insert.
+  const jobIds = chunks.map(() => randomUUID())
   const run = await sequelize.transaction(async (tx) => {
     const created = await Run.create(
       {
@@ -65,13 +69,13 @@ export async function createRun(sequelize: Sequelize, queue: RunQueue, actor: Ac
       { transaction: tx },
     )
     await RunChunk.bulkCreate(
-      chunks.map((c) => ({
+      chunks.map((c, i) => ({
         runId: created.id,
         chunkIndex: c.index,
         startCm: c.startCm,
         endCm: c.endCm,
         status: 'pending' as const,
-        jobId: null,
+        jobId: jobIds[i],
         workerId: null,
         result: null,
         error: null,
@@ -84,10 +88,7 @@ export async function createRun(sequelize: Sequelize, queue: RunQueue, actor: Ac
     return created
   })
   // Queue after the rows are committed, so a fast worker always finds them.
-  for (const c of chunks) {
-    const jobId = await queue.enqueueChunk({ runId: run.id, chunkIndex: c.index })
-    await RunChunk.update({ jobId }, { where: { runId: run.id, chunkIndex: c.index } })
-  }
+  await queue.enqueueChunks(chunks.map((c, i) => ({ jobId: jobIds[i], data: { runId: run.id, chunkIndex: c.index } })))
   return { ...(await getRun(run.id)), mixtureWarnings: warnings }
 }
 
