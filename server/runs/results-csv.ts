@@ -15,21 +15,26 @@ function csvHeader(runId: number, inputHash: string, engineVersion: string, extr
   ].join('\n')
 }
 
+/** The columns shared by the binned spectrum and the full-resolution window, at index i. */
+function spectralRow(s: Record<string, (number | null)[]>, i: number): Record<string, number | null> {
+  return {
+    'wavenumber_cm-1': s.wavenumberCm[i],
+    'olr_W_m-2_(cm-1)-1': s.olrSpectral[i],
+    'surface_down_W_m-2_(cm-1)-1': s.surfaceDownSpectral[i],
+    'toa_nadir_radiance_W_m-2_sr-1_(cm-1)-1': s.toaNadirRadiance[i],
+    toa_brightness_temperature_K: s.toaBrightnessTemperatureK[i],
+    'surface_zenith_radiance_W_m-2_sr-1_(cm-1)-1': s.surfaceZenithRadiance[i],
+    column_transmittance: s.columnTransmittance[i],
+  }
+}
+
 /** The full-resolution window as CSV: one row per point of the calculation's grid. */
 export function detailCsv(detail: DetailSpectrum): string {
   const d = detail as unknown as Record<string, (number | null)[]> & { startCm: number; endCm: number }
   const header = csvHeader(detail.runId, detail.inputHash, detail.engineVersion, [
     `# Full-resolution window ${d.startCm}–${d.endCm} cm-1 on the calculation's own grid (not uniform: fine near line centres).`,
   ])
-  const rows = d.wavenumberCm.map((_, i) => ({
-    'wavenumber_cm-1': d.wavenumberCm[i],
-    'olr_W_m-2_(cm-1)-1': d.olrSpectral[i],
-    'surface_down_W_m-2_(cm-1)-1': d.surfaceDownSpectral[i],
-    'toa_nadir_radiance_W_m-2_sr-1_(cm-1)-1': d.toaNadirRadiance[i],
-    toa_brightness_temperature_K: d.toaBrightnessTemperatureK[i],
-    'surface_zenith_radiance_W_m-2_sr-1_(cm-1)-1': d.surfaceZenithRadiance[i],
-    column_transmittance: d.columnTransmittance[i],
-  }))
+  const rows = d.wavenumberCm.map((_, i) => spectralRow(d, i))
   return `${header}\n${Papa.unparse(rows)}\n`
 }
 
@@ -45,13 +50,7 @@ export function resultsCsv(results: Results, table: Exclude<CsvTable, 'detail'>)
   if (table === 'spectrum') {
     const s = r.spectrum
     rows = s.wavenumberCm.map((_, i) => ({
-      'wavenumber_cm-1': s.wavenumberCm[i],
-      'olr_W_m-2_(cm-1)-1': s.olrSpectral[i],
-      'surface_down_W_m-2_(cm-1)-1': s.surfaceDownSpectral[i],
-      'toa_nadir_radiance_W_m-2_sr-1_(cm-1)-1': s.toaNadirRadiance[i],
-      toa_brightness_temperature_K: s.toaBrightnessTemperatureK[i],
-      'surface_zenith_radiance_W_m-2_sr-1_(cm-1)-1': s.surfaceZenithRadiance[i],
-      column_transmittance: s.columnTransmittance[i],
+      ...spectralRow(s, i),
       emission_pressure_Pa: s.emissionPressurePa[i],
       emission_height_m: s.emissionHeightM[i],
     }))
