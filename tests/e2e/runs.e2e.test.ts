@@ -11,7 +11,8 @@ let base: string
 let browser: Awaited<ReturnType<typeof launchBrowser>>
 
 beforeAll(async () => {
-  if (!existsSync('dist/index.html')) throw new Error('Build the client first (npx vite build); npm test does it.')
+  if (!existsSync('dist/index.html'))
+    throw new Error('Build the client first (npx vite build); npm test does it.')
   t = await createTestApp({ clientDistDir: 'dist', runs: { threads: 1 }, seedWorkspace: true })
   server = t.app.listen(0, '127.0.0.1')
   await new Promise((resolve) => server.once('listening', resolve))
@@ -49,7 +50,9 @@ describe('a run from the demo data', () => {
     // Progress fills in chunk by chunk; the bar ends at 100 % and the results appear under it.
     await page.waitForSelector('[data-test=run-progress]')
     await page.waitForSelector('[data-test=run-summary]', { timeout: 120_000 })
-    expect(await page.getAttribute('[data-test=run-progress] [data-percent]', 'data-percent')).toBe('100')
+    expect(await page.getAttribute('[data-test=run-progress] [data-percent]', 'data-percent')).toBe(
+      '100',
+    )
     expect(await page.textContent('[data-test=run-progress-text]')).toMatch(/4 of 4 chunks/)
     const summary = await page.textContent('[data-test=run-summary]')
     expect(summary).toMatch(/Outgoing longwave radiation\s*[\d.]+/)
@@ -60,6 +63,23 @@ describe('a run from the demo data', () => {
     await page.goto(`${base}/runs`)
     await page.waitForSelector('[data-test=runs-page] [data-run-id]')
     expect(await page.textContent('[data-test=runs-page]')).toContain('Browser test run')
+    await page.close()
+  })
+
+  it('when its owner deletes a finished run from its page, the run is gone from the list', async () => {
+    // The browser context is still signed in as the analyst who made the run above.
+    const page = await browser.context.newPage()
+    await page.goto(`${base}/runs`)
+    await page.waitForSelector('[data-test=runs-page] [data-run-id]')
+    const runId = await page.getAttribute('[data-test=runs-page] [data-run-id]', 'data-run-id')
+    await page.goto(`${base}/runs/${runId}`)
+    await page.waitForSelector('[data-test=run-summary]')
+    await page.click('[data-test=delete-run]')
+    await page.getByRole('button', { name: 'Confirm' }).click()
+    await page.waitForURL(`${base}/runs`)
+    await page.waitForSelector('[data-test=runs-page]')
+    expect(await page.locator(`[data-test=runs-page] [data-run-id="${runId}"]`).count()).toBe(0)
+    expect((await page.request.get(`${base}/api/runs/${runId}`)).status()).toBe(404)
     await page.close()
   })
 })
