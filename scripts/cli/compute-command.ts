@@ -2,22 +2,35 @@ import { writeFileSync } from 'node:fs'
 import { parseArgs } from 'node:util'
 import Papa from 'papaparse'
 import { computeRadiation } from '../../shared/physics/engine/compute'
-import { printJson, printTable } from './args'
+import { CliError, parseRange, printJson, printTable } from './args'
 import { CAUTIONS } from './cautions'
 import { catalogueLines, gasesFromOptions, profileFromOptions, progressPrinter, scenarioHelp, scenarioOptionSpec, settingsFromOptions, withGases } from './scenario-options'
 
-export const computeHelp = `tauline compute [atmosphere, gas and spectrum options] [--spectrum-out FILE.csv] [--json]
+export const computeHelp = `tauline compute [atmosphere, gas and spectrum options] [--spectrum-out FILE.csv]
+               [--window START:END --window-out FILE.csv] [--json]
   One line-by-line calculation: fluxes at every level, OLR, surface downward flux, heating rates,
   spectral OLR. Uses the built-in line catalogue.
 ${scenarioHelp}
-  --spectrum-out FILE.csv  write the binned spectra (OLR, surface downward flux, brightness temperature)`
+  --spectrum-out FILE.csv  write the binned spectra (OLR, surface downward flux, brightness temperature)
+  --window START:END       keep a window (≤ 100 cm⁻¹) at the calculation's own grid, no bin averaging
+  --window-out FILE.csv    write that window: every grid point (not evenly spaced) with OLR, surface
+                           downward flux, nadir radiance, brightness temperature, column transmittance`
 
 export function computeCommand(argv: string[]): void {
-  const { values } = parseArgs({ args: argv, options: { ...scenarioOptionSpec, 'spectrum-out': { type: 'string' } } })
+  const { values } = parseArgs({
+    args: argv,
+    options: { ...scenarioOptionSpec, 'spectrum-out': { type: 'string' }, window: { type: 'string' }, 'window-out': { type: 'string' } },
+  })
+  if (values['window-out'] && !values.window) throw new CliError('--window-out needs --window START:END')
   const profile = withGases(profileFromOptions(values), gasesFromOptions(values))
   const catalogue = catalogueLines()
+  const settings = settingsFromOptions(values)
+  if (values.window) {
+    const [startCm, endCm] = parseRange(values.window, 'window')
+    settings.detailWindow = { startCm, endCm }
+  }
   const t0 = Date.now()
-  const r = computeRadiation(profile, catalogue.table, settingsFromOptions(values), progressPrinter(values.quiet!, 'computing'))
+  const r = computeRadiation(profile, catalogue.table, settings, progressPrinter(values.quiet!, 'computing'))
   const wallSeconds = (Date.now() - t0) / 1000
   const spectrumRows = Array.from(r.wavenumberCm, (w, i) => ({
     'wavenumber_cm-1': w,
@@ -26,6 +39,18 @@ export function computeCommand(argv: string[]): void {
     toa_brightness_temperature_K: r.toaBrightnessTemperatureK[i],
   }))
   if (values['spectrum-out']) writeFileSync(values['spectrum-out'], Papa.unparse(spectrumRows) + '\n')
+  const d = r.detail
+  if (values['window-out'] && d) {
+    const windowRows = Array.from(d.wavenumberCm, (w, i) => ({
+      'wavenumber_cm-1': w,
+      'olr_W_m-2_(cm-1)-1': d.olrSpectral[i],
+      'surface_down_W_m-2_(cm-1)-1': d.surfaceDownSpectral[i],
+      'toa_nadir_radiance_W_m-2_sr-1_(cm-1)-1': d.toaNadirRadiance[i],
+      toa_brightness_temperature_K: d.toaBrightnessTemperatureK[i],
+      column_transmittance: d.columnTransmittance[i],
+    }))
+    writeFileSync(values['window-out'], Papa.unparse(windowRows) + '\n')
+  }
   if (values.json) {
     printJson({
       atmosphere: profile.name,
@@ -45,6 +70,7 @@ export function computeCommand(argv: string[]): void {
       },
       heatingRateKPerDay: r.heatingRateKPerDay,
       spectrum: { wavenumberCm: r.wavenumberCm, olrSpectral: r.olrSpectral, toaBrightnessTemperatureK: r.toaBrightnessTemperatureK },
+      ...(d ? { window: { pointCount: d.wavenumberCm.length, wavenumberCm: d.wavenumberCm, olrSpectral: d.olrSpectral, toaBrightnessTemperatureK: d.toaBrightnessTemperatureK } } : {}),
       wallSeconds,
       cautions: CAUTIONS,
     })
