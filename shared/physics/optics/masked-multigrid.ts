@@ -20,7 +20,7 @@
 import { PhysicsError } from '../errors'
 import { voigtKUnchecked } from '../spectroscopy'
 import type { LayerWingWeight } from './line-wing-weights'
-import { MAX_ZONES, pushInterval, storeMergedZones } from './zone-intervals'
+import { kinksOf, MAX_ZONES, storeLevelZones } from './zone-intervals'
 
 /** Most grid levels used. */
 const MAX_LEVELS = 40
@@ -335,87 +335,21 @@ export function depositMaskedLine(
   // Without edge zones a line has no zone below its core level.
   const startLevel = withEdgeZones ? 0 : Math.min(coreLevel, top)
   for (let level = 0; level < startLevel; level++) ws.zoneCount[level] = 0
+  const kinksCm = kinksOf(weight)
   for (let level = startLevel; level <= top; level++) {
-    const step = ws.stepCm[level]
-    const first = ws.first[level]
-    const last = ws.last[level]
-    let count = 0
-    if (level === top) {
-      count = pushInterval(
-        ws,
-        count,
-        Math.ceil((relative - cutoffCm) / step) - 1,
-        Math.floor((relative + cutoffCm) / step) + 1,
-        first,
-        last,
-      )
-    } else {
-      if (level >= coreLevel) {
-        const radius = nearZoneCoarseSteps * ws.stepCm[level] * ratio
-        count = pushInterval(
-          ws,
-          count,
-          Math.ceil((relative - radius) / step),
-          Math.floor((relative + radius) / step),
-          first,
-          last,
-        )
-      }
-      if (withEdgeZones) {
-        const edge = ws.edgeHalfWidthCm[level]
-        count = pushInterval(
-          ws,
-          count,
-          Math.ceil((relative - cutoffCm - edge) / step),
-          Math.floor((relative - cutoffCm + edge) / step),
-          first,
-          last,
-        )
-        count = pushInterval(
-          ws,
-          count,
-          Math.ceil((relative + cutoffCm - edge) / step),
-          Math.floor((relative + cutoffCm + edge) / step),
-          first,
-          last,
-        )
-        if (weight !== undefined) {
-          for (const kink of weight.kinksCm) {
-            if (!(kink < cutoffCm)) break
-            count = pushInterval(
-              ws,
-              count,
-              Math.ceil((relative - kink - edge) / step),
-              Math.floor((relative - kink + edge) / step),
-              first,
-              last,
-            )
-            count = pushInterval(
-              ws,
-              count,
-              Math.ceil((relative + kink - edge) / step),
-              Math.floor((relative + kink + edge) / step),
-              first,
-              last,
-            )
-          }
-        }
-      }
-    }
-    if (level > startLevel) {
-      const below = (level - 1) * MAX_ZONES
-      for (let z = 0; z < ws.zoneCount[level - 1]; z++) {
-        count = pushInterval(
-          ws,
-          count,
-          Math.floor(ws.zoneLo[below + z] / ratio) - 1,
-          Math.floor(ws.zoneHi[below + z] / ratio) + 2,
-          first,
-          last,
-        )
-      }
-    }
-    storeMergedZones(ws, level, count)
+    storeLevelZones(ws, level, {
+      positionCm: relative,
+      stepCm: ws.stepCm[level],
+      isTop: level === top,
+      cutoffCm,
+      coreRadiusCm: level >= coreLevel ? nearZoneCoarseSteps * ws.stepCm[level] * ratio : NaN,
+      edgeHalfWidthCm: withEdgeZones ? ws.edgeHalfWidthCm[level] : NaN,
+      kinksCm,
+      coverLevelBelow: level > startLevel,
+      ratio,
+      first: ws.first[level],
+      last: ws.last[level],
+    })
   }
 
   const baseStep = ws.baseStepCm

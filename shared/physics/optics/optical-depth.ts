@@ -87,7 +87,7 @@ import {
   type ResolvedOpticsOptions,
 } from './optics-options'
 import { gridIndexRange, gridWavenumbersCm } from './spectral-grid'
-import { MAX_ZONES, pushInterval, storeMergedZones } from './zone-intervals'
+import { kinksOf, MAX_ZONES, storeLevelZones } from './zone-intervals'
 
 const SQRT_LN2 = Math.sqrt(Math.LN2)
 const SQRT_LN2_OVER_PI = Math.sqrt(Math.LN2 / Math.PI)
@@ -322,85 +322,21 @@ function depositLine(
   const ratio = ws.ratio
   const onset = weight === undefined ? Infinity : weight.onsetCm
   // Zones, from the finest level up (each contains the stencils of the one below).
+  const kinksCm = kinksOf(weight)
   for (let level = 0; level <= top; level++) {
-    const step = ws.stepCm[level]
-    const first = ws.first[level]
-    const last = ws.last[level]
-    let count = 0
-    if (level === top) {
-      count = pushInterval(
-        ws,
-        count,
-        Math.ceil((centreCm - cutoffCm) / step) - 1,
-        Math.floor((centreCm + cutoffCm) / step) + 1,
-        first,
-        last,
-      )
-    } else {
-      if (level >= coreLevel) {
-        const radius = ws.coreRadiusCm[level]
-        count = pushInterval(
-          ws,
-          count,
-          Math.ceil((centreCm - radius) / step),
-          Math.floor((centreCm + radius) / step),
-          first,
-          last,
-        )
-      }
-      const edge = ws.edgeHalfWidthCm[level]
-      count = pushInterval(
-        ws,
-        count,
-        Math.ceil((centreCm - cutoffCm - edge) / step),
-        Math.floor((centreCm - cutoffCm + edge) / step),
-        first,
-        last,
-      )
-      count = pushInterval(
-        ws,
-        count,
-        Math.ceil((centreCm + cutoffCm - edge) / step),
-        Math.floor((centreCm + cutoffCm + edge) / step),
-        first,
-        last,
-      )
-      if (weight !== undefined) {
-        for (const kink of weight.kinksCm) {
-          if (!(kink < cutoffCm)) break
-          count = pushInterval(
-            ws,
-            count,
-            Math.ceil((centreCm - kink - edge) / step),
-            Math.floor((centreCm - kink + edge) / step),
-            first,
-            last,
-          )
-          count = pushInterval(
-            ws,
-            count,
-            Math.ceil((centreCm + kink - edge) / step),
-            Math.floor((centreCm + kink + edge) / step),
-            first,
-            last,
-          )
-        }
-      }
-    }
-    if (level > 0) {
-      const below = (level - 1) * MAX_ZONES
-      for (let z = 0; z < ws.zoneCount[level - 1]; z++) {
-        count = pushInterval(
-          ws,
-          count,
-          Math.floor(ws.zoneLo[below + z] / ratio) - 1,
-          Math.floor(ws.zoneHi[below + z] / ratio) + 2,
-          first,
-          last,
-        )
-      }
-    }
-    storeMergedZones(ws, level, count)
+    storeLevelZones(ws, level, {
+      positionCm: centreCm,
+      stepCm: ws.stepCm[level],
+      isTop: level === top,
+      cutoffCm,
+      coreRadiusCm: level >= coreLevel ? ws.coreRadiusCm[level] : NaN,
+      edgeHalfWidthCm: ws.edgeHalfWidthCm[level],
+      kinksCm,
+      coverLevelBelow: level > 0,
+      ratio,
+      first: ws.first[level],
+      last: ws.last[level],
+    })
   }
 
   // Values, from the top level down: A_ℓ = f − P_ℓ₊₁[f] on the zone nodes.
