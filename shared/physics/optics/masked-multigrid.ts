@@ -20,7 +20,7 @@
 import { PhysicsError } from '../errors'
 import { voigtKUnchecked } from '../spectroscopy'
 import type { LayerWingWeight } from './line-wing-weights'
-import { kinksOf, MAX_ZONES, storeLevelZones } from './zone-intervals'
+import { kinksOf, MAX_ZONES, storeLevelZones, type LevelZoneSpec } from './zone-intervals'
 
 /** Most grid levels used. */
 const MAX_LEVELS = 40
@@ -335,21 +335,29 @@ export function depositMaskedLine(
   // Without edge zones a line has no zone below its core level.
   const startLevel = withEdgeZones ? 0 : Math.min(coreLevel, top)
   for (let level = 0; level < startLevel; level++) ws.zoneCount[level] = 0
-  const kinksCm = kinksOf(weight)
+  // One spec per line, updated level by level (no allocation per level).
+  const zones: LevelZoneSpec = {
+    positionCm: relative,
+    stepCm: 0,
+    isTop: false,
+    cutoffCm,
+    coreRadiusCm: NaN,
+    edgeHalfWidthCm: NaN,
+    kinksCm: kinksOf(weight),
+    coverLevelBelow: false,
+    ratio,
+    first: 0,
+    last: 0,
+  }
   for (let level = startLevel; level <= top; level++) {
-    storeLevelZones(ws, level, {
-      positionCm: relative,
-      stepCm: ws.stepCm[level],
-      isTop: level === top,
-      cutoffCm,
-      coreRadiusCm: level >= coreLevel ? nearZoneCoarseSteps * ws.stepCm[level] * ratio : NaN,
-      edgeHalfWidthCm: withEdgeZones ? ws.edgeHalfWidthCm[level] : NaN,
-      kinksCm,
-      coverLevelBelow: level > startLevel,
-      ratio,
-      first: ws.first[level],
-      last: ws.last[level],
-    })
+    zones.stepCm = ws.stepCm[level]
+    zones.isTop = level === top
+    zones.coreRadiusCm = level >= coreLevel ? nearZoneCoarseSteps * ws.stepCm[level] * ratio : NaN
+    zones.edgeHalfWidthCm = withEdgeZones ? ws.edgeHalfWidthCm[level] : NaN
+    zones.coverLevelBelow = level > startLevel
+    zones.first = ws.first[level]
+    zones.last = ws.last[level]
+    storeLevelZones(ws, level, zones)
   }
 
   const baseStep = ws.baseStepCm

@@ -87,7 +87,7 @@ import {
   type ResolvedOpticsOptions,
 } from './optics-options'
 import { gridIndexRange, gridWavenumbersCm } from './spectral-grid'
-import { kinksOf, MAX_ZONES, storeLevelZones } from './zone-intervals'
+import { kinksOf, MAX_ZONES, storeLevelZones, type LevelZoneSpec } from './zone-intervals'
 
 const SQRT_LN2 = Math.sqrt(Math.LN2)
 const SQRT_LN2_OVER_PI = Math.sqrt(Math.LN2 / Math.PI)
@@ -322,21 +322,29 @@ function depositLine(
   const ratio = ws.ratio
   const onset = weight === undefined ? Infinity : weight.onsetCm
   // Zones, from the finest level up (each contains the stencils of the one below).
-  const kinksCm = kinksOf(weight)
+  // One spec per line, updated level by level (no allocation per level).
+  const zones: LevelZoneSpec = {
+    positionCm: centreCm,
+    stepCm: 0,
+    isTop: false,
+    cutoffCm,
+    coreRadiusCm: NaN,
+    edgeHalfWidthCm: NaN,
+    kinksCm: kinksOf(weight),
+    coverLevelBelow: false,
+    ratio,
+    first: 0,
+    last: 0,
+  }
   for (let level = 0; level <= top; level++) {
-    storeLevelZones(ws, level, {
-      positionCm: centreCm,
-      stepCm: ws.stepCm[level],
-      isTop: level === top,
-      cutoffCm,
-      coreRadiusCm: level >= coreLevel ? ws.coreRadiusCm[level] : NaN,
-      edgeHalfWidthCm: ws.edgeHalfWidthCm[level],
-      kinksCm,
-      coverLevelBelow: level > 0,
-      ratio,
-      first: ws.first[level],
-      last: ws.last[level],
-    })
+    zones.stepCm = ws.stepCm[level]
+    zones.isTop = level === top
+    zones.coreRadiusCm = level >= coreLevel ? ws.coreRadiusCm[level] : NaN
+    zones.edgeHalfWidthCm = ws.edgeHalfWidthCm[level]
+    zones.coverLevelBelow = level > 0
+    zones.first = ws.first[level]
+    zones.last = ws.last[level]
+    storeLevelZones(ws, level, zones)
   }
 
   // Values, from the top level down: A_ℓ = f − P_ℓ₊₁[f] on the zone nodes.
