@@ -31,10 +31,10 @@ export function createRunsController(sequelize: Sequelize, getQueue: () => RunQu
       res.status(204).end()
     },
     async results(req: Request, res: Response) {
-      res.json(await runs.getRunResults(idParam(req)))
+      res.type('application/json').send(await runs.getRunResultsJsonText(idParam(req)))
     },
     async detail(req: Request, res: Response) {
-      res.json(await runs.getRunDetailSpectrum(idParam(req)))
+      res.type('application/json').send(await runs.getRunDetailJsonText(idParam(req)))
     },
     async resultsCsv(req: Request, res: Response) {
       const table = String(req.query.table ?? 'spectrum') as CsvTable

@@ -85,7 +85,7 @@ export class RunChunk extends Model<InferAttributes<RunChunk>, InferCreationAttr
         attempts: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         jobId: { type: DataTypes.STRING(64), allowNull: true },
         workerId: { type: DataTypes.STRING(120), allowNull: true },
-        result: { type: DataTypes.JSONB, allowNull: true },
+        result: { type: DataTypes.JSON, allowNull: true },
         error: { type: DataTypes.TEXT, allowNull: true },
         computeMs: { type: DataTypes.DOUBLE, allowNull: true },
         startedAt: { type: DataTypes.DATE, allowNull: true },
@@ -111,8 +111,9 @@ export class RunResult extends Model<InferAttributes<RunResult>, InferCreationAt
       {
         runId: { type: DataTypes.INTEGER, primaryKey: true },
         summary: { type: DataTypes.JSONB, allowNull: false },
-        data: { type: DataTypes.JSONB, allowNull: false },
-        detail: { type: DataTypes.JSONB, allowNull: true },
+        // Plain json: written once, read whole (migration 0009).
+        data: { type: DataTypes.JSON, allowNull: false },
+        detail: { type: DataTypes.JSON, allowNull: true },
         createdAt: DataTypes.DATE,
       },
       { sequelize, tableName: 'run_results', modelName: 'RunResult', updatedAt: false },

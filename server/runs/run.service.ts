@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto'
-import { literal, Op, type Sequelize, type WhereOptions } from 'sequelize'
+import { literal, Op, QueryTypes, type Sequelize, type WhereOptions } from 'sequelize'
 import { planChunks } from '../../shared/physics/engine/prepare'
 import type { Page } from '../../shared/schemas/paging'
 import { TERMINAL_RUN_STATUSES, type CreateRunInput, type RunDetail, type RunListQuery, type RunSummary } from '../../shared/schemas/runs'
@@ -191,9 +191,53 @@ export async function deleteRun(sequelize: Sequelize, queue: RunQueue, actor: Ac
   })
 }
 
-export async function getRunResults(id: number) {
+async function succeededRunOrFail(id: number): Promise<Run> {
   const run = await findOrFail(id)
   if (run.status !== 'succeeded') throw AppError.conflict(`The run has no results yet (status: ${run.status}).`)
+  return run
+}
+
+/** One stored JSON column of a run's results as the text PostgreSQL holds (null when unset). */
+async function storedJsonText(id: number, column: 'data' | 'detail'): Promise<{ summary: string; body: string | null } | null> {
+  const rows = await RunResult.sequelize!.query<{ summary: string; body: string | null }>(
+    `SELECT summary::text AS summary, ${column}::text AS body FROM run_results WHERE run_id = :id`,
+    { replacements: { id }, type: QueryTypes.SELECT },
+  )
+  return rows[0] ?? null
+}
+
+/**
+ * The run's results as JSON text, the same document as getRunResults: the stored text is passed
+ * through instead of parsed and serialised again (a 10–3000 cm⁻¹ run holds ≈ 7.5 MB).
+ */
+export async function getRunResultsJsonText(id: number): Promise<string> {
+  const run = await succeededRunOrFail(id)
+  const stored = await storedJsonText(id, 'data')
+  if (!stored?.body) throw AppError.notFound('Run results')
+  const head = JSON.stringify({ runId: id, inputHash: run.inputHash, engineVersion: run.engineVersion })
+  return spliceJsonObjects(head, `{"summary":${stored.summary}}`, stored.body)
+}
+
+/** The full-resolution window as JSON text (the same document as getRunDetailSpectrum). */
+export async function getRunDetailJsonText(id: number): Promise<string> {
+  const run = await succeededRunOrFail(id)
+  const stored = await storedJsonText(id, 'detail')
+  if (!stored?.body || stored.body === 'null') throw noDetailWindow()
+  const head = JSON.stringify({ runId: id, inputHash: run.inputHash, engineVersion: run.engineVersion })
+  return spliceJsonObjects(head, stored.body)
+}
+
+/** Joins JSON object texts into one object (keys of later ones follow; none may be empty). */
+function spliceJsonObjects(...objects: string[]): string {
+  const inner = objects.map((o) => o.trim().slice(1, -1).trim()).filter((o) => o.length > 0)
+  return `{${inner.join(',')}}`
+}
+
+const noDetailWindow = () =>
+  new AppError(404, 'NOT_FOUND', 'This run has no full-resolution window: set one in the spectral settings of a new run.')
+
+export async function getRunResults(id: number) {
+  const run = await succeededRunOrFail(id)
   // The full-resolution window is served on its own (getRunDetailSpectrum).
   const result = await RunResult.findByPk(id, { attributes: ['runId', 'summary', 'data'] })
   if (!result) throw AppError.notFound('Run results')
@@ -202,11 +246,8 @@ export async function getRunResults(id: number) {
 
 /** The run's full-resolution window; 404 when the run did not ask for one. */
 export async function getRunDetailSpectrum(id: number) {
-  const run = await findOrFail(id)
-  if (run.status !== 'succeeded') throw AppError.conflict(`The run has no results yet (status: ${run.status}).`)
+  const run = await succeededRunOrFail(id)
   const result = await RunResult.findByPk(id, { attributes: ['runId', 'detail'] })
-  if (!result?.detail) {
-    throw new AppError(404, 'NOT_FOUND', 'This run has no full-resolution window: set one in the spectral settings of a new run.')
-  }
+  if (!result?.detail) throw noDetailWindow()
   return { runId: id, inputHash: run.inputHash, engineVersion: run.engineVersion, ...result.detail }
 }

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { computeRadiation } from '../../shared/physics/engine/compute'
 import { loadBuiltInCatalogue } from '../../server/catalogue/builtin-catalogue'
+import { getRunDetailSpectrum, getRunResults } from '../../server/runs/run.service'
 import { signedInAgent } from '../support/http-agent'
 import { createPresetProfile, QUICK_RUN_SETTINGS, waitForRun } from '../support/runs'
 import { createTestApp, type TestApp } from '../support/test-app'
@@ -52,6 +53,9 @@ describe('full-resolution window of a run', () => {
     // The binned results do not carry the window.
     const results = (await a.get(`/api/runs/${run.id}/results`).expect(200)).body
     expect(results.detail).toBeUndefined()
+    // Both documents are the stored text passed through: the same as read and re-serialised.
+    expect(results).toEqual(JSON.parse(JSON.stringify(await getRunResults(run.id))))
+    expect(detail).toEqual(JSON.parse(JSON.stringify(await getRunDetailSpectrum(run.id))))
 
     const csv = await a.get(`/api/runs/${run.id}/results.csv?table=detail`).expect(200)
     const rows = csv.text.split('\n').filter((l: string) => l && !l.startsWith('#'))

@@ -5,7 +5,7 @@ import { ThrottledPgSessionStore } from '../../../server/auth/session-store'
 // The session store thins out touches (rolling sessions would write the session row on every
 // request); a fake pool counts the statements that reach the database.
 function storeWithCountingPool() {
-  const query = vi.fn(async () => ({ rows: [] }))
+  const query = vi.fn(async (_sql: string, _params?: unknown[]) => ({ rows: [] }))
   const store = new ThrottledPgSessionStore({ query } as unknown as pg.Pool)
   const touches = () => query.mock.calls.filter(([sql]) => String(sql).startsWith('UPDATE')).length
   return { store, touches }
