@@ -14,21 +14,13 @@
  * indices and statistical weights are not stored: the engine does not use them, and the import
  * summary keeps what the catalogue page shows about them.
  */
-import type { LineTable, SpectralLine } from '../../shared/physics/spectroscopy/line'
+import { LINE_FLOAT_COLUMNS, type LineTable, type SpectralLine } from '../../shared/physics/spectroscopy/line'
 
 /** Lines per stored block. */
 export const BLOCK_LINE_CAPACITY = 50_000
 
-export const FLOAT_COLUMNS = [
-  'wavenumberCm',
-  'intensityCmPerMolecule',
-  'einsteinAPerS',
-  'airHalfWidthCmPerAtm',
-  'selfHalfWidthCmPerAtm',
-  'lowerStateEnergyCm',
-  'temperatureExponentAir',
-  'pressureShiftCmPerAtm',
-] as const
+/** Float columns in stored order (the line table's own column order). */
+export const FLOAT_COLUMNS = LINE_FLOAT_COLUMNS
 export const INT_COLUMNS = ['moleculeId', 'isotopologueId'] as const
 
 type FloatColumn = (typeof FLOAT_COLUMNS)[number]

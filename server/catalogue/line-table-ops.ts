@@ -2,22 +2,12 @@
  * Whole-table operations on line tables loaded from stored blocks: sorting by wavenumber and
  * merging an import with the built-in lines of the molecules it lacks.
  */
-import { createLineTable, type LineTable } from '../../shared/physics/spectroscopy/line'
+import { createLineTable, LINE_FLOAT_COLUMNS, type LineTable } from '../../shared/physics/spectroscopy/line'
 
-const FLOAT_KEYS = [
-  'wavenumberCm',
-  'intensityCmPerMolecule',
-  'einsteinAPerS',
-  'airHalfWidthCmPerAtm',
-  'selfHalfWidthCmPerAtm',
-  'lowerStateEnergyCm',
-  'temperatureExponentAir',
-  'pressureShiftCmPerAtm',
-] as const
 const INT_KEYS = ['moleculeId', 'isotopologueId', 'sourceIndex'] as const
 
 function copyRow(from: LineTable, i: number, to: LineTable, k: number): void {
-  for (const key of FLOAT_KEYS) to[key][k] = from[key][i]
+  for (const key of LINE_FLOAT_COLUMNS) to[key][k] = from[key][i]
   for (const key of INT_KEYS) to[key][k] = from[key][i]
 }
 

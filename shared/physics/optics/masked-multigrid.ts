@@ -20,6 +20,7 @@
 import { PhysicsError } from '../errors'
 import { voigtKUnchecked } from '../spectroscopy'
 import type { LayerWingWeight } from './line-wing-weights'
+import { lagrangeWeights } from './lagrange-weights'
 import { kinksOf, MAX_ZONES, storeLevelZones, type LevelZoneSpec } from './zone-intervals'
 
 /** Most grid levels used. */
@@ -52,26 +53,6 @@ export interface MaskedMultigrid {
   pointLevel: Uint8Array
   pointNode: Float64Array
   voigtEvaluations: number
-}
-
-/**
- * Cubic (4-point) Lagrange weights on nodes −1, 0, 1, 2 for t = j/r, j = 0 … r − 1, with the
- * exact copy at t = 0. Source: Abramowitz & Stegun 1964, 25.2.13 (from memory).
- */
-function lagrangeWeights(ratio: number): Float64Array {
-  const weights = new Float64Array(4 * ratio)
-  for (let j = 0; j < ratio; j++) {
-    const t = j / ratio
-    weights[4 * j] = (-t * (t - 1) * (t - 2)) / 6
-    weights[4 * j + 1] = ((t + 1) * (t - 1) * (t - 2)) / 2
-    weights[4 * j + 2] = (-(t + 1) * t * (t - 2)) / 2
-    weights[4 * j + 3] = ((t + 1) * t * (t - 1)) / 6
-  }
-  weights[0] = 0
-  weights[1] = 1
-  weights[2] = 0
-  weights[3] = 0
-  return weights
 }
 
 /** Masked intervals closer than this many nodes are joined (fewer, longer loops). */

@@ -87,6 +87,7 @@ import {
   type ResolvedOpticsOptions,
 } from './optics-options'
 import { gridIndexRange, gridWavenumbersCm } from './spectral-grid'
+import { lagrangeWeights } from './lagrange-weights'
 import { kinksOf, MAX_ZONES, storeLevelZones, type LevelZoneSpec } from './zone-intervals'
 
 const SQRT_LN2 = Math.sqrt(Math.LN2)
@@ -165,27 +166,6 @@ interface Workspace {
   scratchLo: Float64Array
   scratchHi: Float64Array
   voigtEvaluations: number
-}
-
-/**
- * Cubic (4-point) Lagrange weights on nodes −1, 0, 1, 2 for t = j/r, j = 0 … r − 1.
- * Source: Lagrange interpolation, Abramowitz & Stegun 1964, 25.2.13 (from memory).
- */
-function lagrangeWeights(ratio: number): Float64Array {
-  const weights = new Float64Array(4 * ratio)
-  for (let j = 0; j < ratio; j++) {
-    const t = j / ratio
-    weights[4 * j] = (-t * (t - 1) * (t - 2)) / 6
-    weights[4 * j + 1] = ((t + 1) * (t - 1) * (t - 2)) / 2
-    weights[4 * j + 2] = (-(t + 1) * t * (t - 2)) / 2
-    weights[4 * j + 3] = ((t + 1) * t * (t - 1)) / 6
-  }
-  // Exact copy at shared nodes.
-  weights[0] = 0
-  weights[1] = 1
-  weights[2] = 0
-  weights[3] = 0
-  return weights
 }
 
 /** The power-of-two step for a narrowest HWHM (see the module comment). */

@@ -96,7 +96,11 @@ export function createLineTable(length: number): LineTable {
   }
 }
 
-const NUMERIC_FIELDS = [
+/**
+ * The floating-point columns of a line table in a fixed order (stored line blocks keep their
+ * columns in this order, so it must not change).
+ */
+export const LINE_FLOAT_COLUMNS = [
   'wavenumberCm',
   'intensityCmPerMolecule',
   'einsteinAPerS',
@@ -119,7 +123,7 @@ export function validateSpectralLine(line: SpectralLine, index = 0): void {
       })
     }
   }
-  for (const field of NUMERIC_FIELDS) {
+  for (const field of LINE_FLOAT_COLUMNS) {
     const value = line[field]
     if (typeof value !== 'number' || !Number.isFinite(value)) {
       throw new PhysicsError(
