@@ -1,31 +1,24 @@
-import { existsSync } from 'node:fs'
-import type { AddressInfo } from 'node:net'
-import type { Server } from 'node:http'
 import type { Page } from 'playwright-core'
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest'
 import { AREA_ROLES, ROLES, type Role } from '../../shared/schemas/auth'
-import { launchBrowser } from '../support/browser'
-import { createTestApp, type TestApp } from '../support/test-app'
+import { startE2eApp, type E2eApp } from '../support/e2e-app'
+import type { TestApp } from '../support/test-app'
 
 let t: TestApp
-let server: Server
+let app: E2eApp
 let base: string
-let browser: Awaited<ReturnType<typeof launchBrowser>>
+let browser: E2eApp['browser']
 let page: Page
 
 beforeAll(async () => {
-  if (!existsSync('dist/index.html')) throw new Error('Build the client first (npx vite build); npm test does it.')
-  t = await createTestApp({ clientDistDir: 'dist' })
-  server = t.app.listen(0, '127.0.0.1')
-  await new Promise((resolve) => server.once('listening', resolve))
-  base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`
-  browser = await launchBrowser()
+  app = await startE2eApp({})
+  t = app.t
+  base = app.base
+  browser = app.browser
 })
 
 afterAll(async () => {
-  await browser?.close()
-  await new Promise((resolve) => server?.close(resolve))
-  await t?.close()
+  await app?.close()
 })
 
 beforeEach(async () => {
@@ -48,22 +41,29 @@ function expectedAreas(role: Role): string[] {
 }
 
 describe('signing in through the browser', () => {
-  it.each(ROLES)('when the %s signs in, sees the navigation of that role and can sign out', async (role) => {
-    const { email, password } = t.account(role)
-    await signIn(email, password)
-    await page.waitForSelector('[data-test=dashboard]')
-    const areas = await page.$$eval('nav [data-area]', (els) => els.map((e) => e.getAttribute('data-area')!))
-    expect(areas.sort()).toEqual(expectedAreas(role))
-    expect(await page.textContent('[data-test=who-am-i]')).toContain(role === 'admin' ? 'Administrator' : role === 'reviewer' ? 'Reviewer' : 'Analyst')
+  it.each(ROLES)(
+    'when the %s signs in, sees the navigation of that role and can sign out',
+    async (role) => {
+      const { email, password } = t.account(role)
+      await signIn(email, password)
+      await page.waitForSelector('[data-test=dashboard]')
+      const areas = await page.$$eval('nav [data-area]', (els) =>
+        els.map((e) => e.getAttribute('data-area')!),
+      )
+      expect(areas.sort()).toEqual(expectedAreas(role))
+      expect(await page.textContent('[data-test=who-am-i]')).toContain(
+        role === 'admin' ? 'Administrator' : role === 'reviewer' ? 'Reviewer' : 'Analyst',
+      )
 
-    await page.click('[data-test=sign-out]')
-    await page.waitForSelector('[data-test=sign-in-submit]')
-    expect(new URL(page.url()).pathname).toBe('/sign-in')
-    // The session is really gone: a protected page sends us back to sign in.
-    await page.goto(`${base}/runs`)
-    await page.waitForSelector('[data-test=sign-in-submit]')
-    await page.close()
-  })
+      await page.click('[data-test=sign-out]')
+      await page.waitForSelector('[data-test=sign-in-submit]')
+      expect(new URL(page.url()).pathname).toBe('/sign-in')
+      // The session is really gone: a protected page sends us back to sign in.
+      await page.goto(`${base}/runs`)
+      await page.waitForSelector('[data-test=sign-in-submit]')
+      await page.close()
+    },
+  )
 
   it('when the password is wrong, shows a clear message and stays on the sign-in page', async () => {
     await signIn(t.account('analyst').email, 'definitely-wrong')

@@ -1,33 +1,26 @@
-import { existsSync, readFileSync } from 'node:fs'
-import type { AddressInfo } from 'node:net'
-import type { Server } from 'node:http'
+import { readFileSync } from 'node:fs'
 import type { Page } from 'playwright-core'
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest'
-import { launchBrowser } from '../support/browser'
-import { createTestApp, type TestApp } from '../support/test-app'
+import { signInThroughPage, startE2eApp, type E2eApp } from '../support/e2e-app'
+import type { TestApp } from '../support/test-app'
 
 const FIXTURE = 'tests/fixtures/soundings/comma-degc-hpa-dewpoint.csv'
 
 let t: TestApp
-let server: Server
+let app: E2eApp
 let base: string
-let browser: Awaited<ReturnType<typeof launchBrowser>>
+let browser: E2eApp['browser']
 let page: Page
 
 beforeAll(async () => {
-  if (!existsSync('dist/index.html'))
-    throw new Error('Build the client first (npx vite build); npm test does it.')
-  t = await createTestApp({ clientDistDir: 'dist' })
-  server = t.app.listen(0, '127.0.0.1')
-  await new Promise((resolve) => server.once('listening', resolve))
-  base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`
-  browser = await launchBrowser()
+  app = await startE2eApp({})
+  t = app.t
+  base = app.base
+  browser = app.browser
 })
 
 afterAll(async () => {
-  await browser?.close()
-  await new Promise((resolve) => server?.close(resolve))
-  await t?.close()
+  await app?.close()
 })
 
 beforeEach(async () => {
@@ -37,11 +30,7 @@ beforeEach(async () => {
 
 async function signInAsAnalyst() {
   const { email, password } = t.account('analyst')
-  await page.goto(`${base}/sign-in`)
-  await page.fill('input[name=email]', email)
-  await page.fill('input[name=password]', password)
-  await page.click('[data-test=sign-in-submit]')
-  await page.waitForSelector('[data-test=dashboard]')
+  await signInThroughPage(page, base, { email, password })
 }
 
 const text = (selector: string) => page.locator(selector).first().innerText()

@@ -1,28 +1,22 @@
-import { existsSync } from 'node:fs'
-import type { AddressInfo } from 'node:net'
-import type { Server } from 'node:http'
 import type { Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Role } from '../../shared/schemas/auth'
-import { launchBrowser } from '../support/browser'
 import { signedInAgent } from '../support/http-agent'
 import { createPresetProfile, QUICK_RUN_SETTINGS, waitForRun } from '../support/runs'
-import { createTestApp, type TestApp } from '../support/test-app'
+import { signInThroughPage, startE2eApp, type E2eApp } from '../support/e2e-app'
+import type { TestApp } from '../support/test-app'
 
 let t: TestApp
-let server: Server
+let app: E2eApp
 let base: string
-let browser: Awaited<ReturnType<typeof launchBrowser>>
+let browser: E2eApp['browser']
 let runId: number
 
 beforeAll(async () => {
-  if (!existsSync('dist/index.html'))
-    throw new Error('Build the client first (npx vite build); npm test does it.')
-  t = await createTestApp({ clientDistDir: 'dist', runs: { threads: 1 } })
-  server = t.app.listen(0, '127.0.0.1')
-  await new Promise((resolve) => server.once('listening', resolve))
-  base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`
-  browser = await launchBrowser()
+  app = await startE2eApp({ runs: { threads: 1 } })
+  t = app.t
+  base = app.base
+  browser = app.browser
   const analyst = await signedInAgent(t, 'analyst')
   const profileId = await createPresetProfile(analyst)
   const created = await analyst
@@ -33,20 +27,14 @@ beforeAll(async () => {
 })
 
 afterAll(async () => {
-  await browser?.close()
-  await new Promise((resolve) => server?.close(resolve))
-  await t?.close()
+  await app?.close()
 })
 
 async function signIn(role: Role): Promise<Page> {
   // One browser profile for both tests: start each signed out.
   await browser.context.clearCookies()
   const page = await browser.context.newPage()
-  await page.goto(`${base}/sign-in`)
-  await page.fill('input[name=email]', t.account(role).email)
-  await page.fill('input[name=password]', t.account(role).password)
-  await page.click('[data-test=sign-in-submit]')
-  await page.waitForSelector('[data-test=dashboard]')
+  await signInThroughPage(page, base, t.account(role))
   return page
 }
 

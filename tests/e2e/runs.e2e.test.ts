@@ -1,39 +1,27 @@
-import { existsSync } from 'node:fs'
-import type { AddressInfo } from 'node:net'
-import type { Server } from 'node:http'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { launchBrowser } from '../support/browser'
-import { createTestApp, type TestApp } from '../support/test-app'
+import { signInThroughPage, startE2eApp, type E2eApp } from '../support/e2e-app'
+import type { TestApp } from '../support/test-app'
 
 let t: TestApp
-let server: Server
+let app: E2eApp
 let base: string
-let browser: Awaited<ReturnType<typeof launchBrowser>>
+let browser: E2eApp['browser']
 
 beforeAll(async () => {
-  if (!existsSync('dist/index.html'))
-    throw new Error('Build the client first (npx vite build); npm test does it.')
-  t = await createTestApp({ clientDistDir: 'dist', runs: { threads: 1 }, seedWorkspace: true })
-  server = t.app.listen(0, '127.0.0.1')
-  await new Promise((resolve) => server.once('listening', resolve))
-  base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`
-  browser = await launchBrowser()
+  app = await startE2eApp({ runs: { threads: 1 }, seedWorkspace: true })
+  t = app.t
+  base = app.base
+  browser = app.browser
 })
 
 afterAll(async () => {
-  await browser?.close()
-  await new Promise((resolve) => server?.close(resolve))
-  await t?.close()
+  await app?.close()
 })
 
 describe('a run from the demo data', () => {
   it('is submitted from the form, its progress bar reaches 100 %, and its results appear', async () => {
     const page = await browser.context.newPage()
-    await page.goto(`${base}/sign-in`)
-    await page.fill('input[name=email]', t.account('analyst').email)
-    await page.fill('input[name=password]', t.account('analyst').password)
-    await page.click('[data-test=sign-in-submit]')
-    await page.waitForSelector('[data-test=dashboard]')
+    await signInThroughPage(page, base, t.account('analyst'))
 
     await page.goto(`${base}/runs/new`)
     await page.waitForSelector('[data-test=new-run-page]')
