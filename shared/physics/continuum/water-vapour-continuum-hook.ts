@@ -16,6 +16,8 @@ import { addWaterContinuumOpticalDepth, type WaterContinuumParts } from './water
  */
 export function createWaterVapourContinuumHook(parts: WaterContinuumParts = {}): ContinuumHook {
   const chosen: WaterContinuumParts = { self: parts.self ?? true, foreign: parts.foreign ?? true }
-  return (wavenumberCm, layer, _layerIndex, out) =>
+  const hook: ContinuumHook = (wavenumberCm, layer, _layerIndex, out) =>
     addWaterContinuumOpticalDepth(wavenumberCm, layer, out, chosen)
+  // It reads the water-vapour amount only, so a sweep of another gas applies it once.
+  return Object.assign(hook, { gases: ['H2O'] as const })
 }

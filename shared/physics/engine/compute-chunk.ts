@@ -15,7 +15,12 @@
  * A chunk depends only on the prepared inputs and its bounds, so it gives bit-identical numbers
  * on any thread or machine; band fluxes of a run are sums of chunk fluxes in chunk order.
  */
-import { computeAdaptiveChunkOpticalDepth } from '../optics/adaptive-optical-depth'
+import {
+  computeAdaptiveChunkOpticalDepth,
+  type AdaptiveOpticalDepthStats,
+  type AdaptiveOpticsOptions,
+} from '../optics/adaptive-optical-depth'
+import type { AdaptiveSpectralGrid } from '../optics/adaptive-grid'
 import { chooseUniformStepCm, computeChunkOpticalDepth } from '../optics/optical-depth'
 import { computeReferenceOpticalDepth } from '../optics/reference-optical-depth'
 import { createColumnTransferBlock, solveColumnTransfer } from '../transfer/column-transfer'
@@ -87,31 +92,63 @@ function warmestTemperatureK(prepared: PreparedComputation): number {
   return t
 }
 
-function computeAdaptiveChunk(prepared: PreparedComputation, chunk: ChunkBounds): ChunkResult {
-  const { settings, layers, levelTemperatureK, profile } = prepared
-  const nLevels = levelTemperatureK.length
+/** The adaptive optics options of a run's settings. */
+export function adaptiveOpticsOptionsOf(prepared: PreparedComputation): AdaptiveOpticsOptions {
+  const { settings } = prepared
   const adaptive = settings.adaptive ?? {}
+  return {
+    wingCutoffCm: settings.wingCutoffCm,
+    continuum: prepared.continuum,
+    partitionFunctionLookup: prepared.partitionFunctionLookup,
+    lineWingWeights: prepared.lineWingWeights,
+    unitCm: settings.outputResolutionCm,
+    referenceTemperatureK: warmestTemperatureK(prepared),
+    significantPeakOpticalDepth: adaptive.significantPeakOpticalDepth,
+    pointsPerHalfWidth: adaptive.pointsPerHalfWidth,
+    gradingHalfWidths: adaptive.gradingHalfWidths,
+    maxCoarseStepCm: adaptive.maxCoarseStepCm,
+    negligibleFluxWPerM2PerCm: adaptive.negligibleFluxWPerM2PerCm,
+    negligibleHeatingKPerDayPerCm: adaptive.negligibleHeatingKPerDayPerCm,
+  }
+}
+
+/** The work counters of an adaptive chunk. */
+export function adaptiveWorkStats(stats: AdaptiveOpticalDepthStats): ChunkWorkStats {
+  return {
+    spectralMethod: 'adaptive',
+    lineLayerCount: stats.activeLineLayerCount,
+    voigtEvaluations: stats.voigtEvaluations,
+    finestStepCm: stats.finestStepCm,
+    droppedLineLayerCount: stats.droppedLineLayerCount,
+  }
+}
+
+function computeAdaptiveChunk(prepared: PreparedComputation, chunk: ChunkBounds): ChunkResult {
   const optics = computeAdaptiveChunkOpticalDepth({
     lines: prepared.lines,
-    layers,
+    layers: prepared.layers,
     startCm: chunk.startCm,
     endCm: chunk.endCm,
-    options: {
-      wingCutoffCm: settings.wingCutoffCm,
-      continuum: prepared.continuum,
-      partitionFunctionLookup: prepared.partitionFunctionLookup,
-      lineWingWeights: prepared.lineWingWeights,
-      unitCm: settings.outputResolutionCm,
-      referenceTemperatureK: warmestTemperatureK(prepared),
-      significantPeakOpticalDepth: adaptive.significantPeakOpticalDepth,
-      pointsPerHalfWidth: adaptive.pointsPerHalfWidth,
-      gradingHalfWidths: adaptive.gradingHalfWidths,
-      maxCoarseStepCm: adaptive.maxCoarseStepCm,
-      negligibleFluxWPerM2PerCm: adaptive.negligibleFluxWPerM2PerCm,
-      negligibleHeatingKPerDayPerCm: adaptive.negligibleHeatingKPerDayPerCm,
-    },
+    options: adaptiveOpticsOptionsOf(prepared),
   })
-  const grid = optics.grid
+  return solveAdaptiveChunk(prepared, chunk, optics.grid, optics.opticalDepth, adaptiveWorkStats(optics.stats))
+}
+
+/**
+ * The transfer of one chunk on an adaptive grid and the chunk's share of every output: the
+ * point-by-point column solver in blocks, outputs integrated with end-corrected trapezoid weights
+ * into the output bins, and the full-resolution window when it overlaps the chunk.
+ */
+export function solveAdaptiveChunk(
+  prepared: PreparedComputation,
+  chunk: ChunkBounds,
+  grid: AdaptiveSpectralGrid,
+  opticalDepth: readonly Float64Array[],
+  work: ChunkWorkStats,
+  levelPlanckTable?: Float64Array,
+): ChunkResult {
+  const { settings, levelTemperatureK, profile } = prepared
+  const nLevels = levelTemperatureK.length
   const nu = grid.wavenumberCm
   const node = grid.nodeIndex
   const nGrid = nu.length
@@ -133,12 +170,13 @@ function computeAdaptiveChunk(prepared: PreparedComputation, chunk: ChunkBounds)
 
   const input = {
     wavenumberCm: nu,
-    layerOpticalDepth: optics.opticalDepth,
+    layerOpticalDepth: opticalDepth,
     levelTemperatureK,
     surfaceTemperatureK: profile.surfaceTemperatureK,
     surfaceEmissivity: profile.surfaceEmissivity,
     quadrature: prepared.quadrature,
     layerSource: settings.layerSource,
+    levelPlanckTable,
   }
   const addToBin = (bin: number, w: number, j: number): void => {
     binWidth[bin] += w
@@ -221,13 +259,7 @@ function computeAdaptiveChunk(prepared: PreparedComputation, chunk: ChunkBounds)
     surfaceZenithRadianceBinned,
     transmittanceToSpaceBinned,
     ...(detail ? { detail } : {}),
-    work: {
-      spectralMethod: 'adaptive',
-      lineLayerCount: optics.stats.activeLineLayerCount,
-      voigtEvaluations: optics.stats.voigtEvaluations,
-      finestStepCm: optics.stats.finestStepCm,
-      droppedLineLayerCount: optics.stats.droppedLineLayerCount,
-    },
+    work,
   }
 }
 

@@ -219,7 +219,7 @@ export interface AdaptiveChunkOpticalDepthResult {
   stats: AdaptiveOpticalDepthStats
 }
 
-interface ResolvedAdaptiveOptions {
+export interface ResolvedAdaptiveOptions {
   wingCutoffCm: number
   subtractPedestal: boolean
   lineWingWeights: LineWingWeights
@@ -469,7 +469,60 @@ function localStepCm(grid: Float64Array, nu: number): number {
   return step
 }
 
-/** Adds every active line of one layer (weak unresolved ones widened) to the accumulators. */
+/**
+ * Rows of the line slice a deposit takes: every row (null), only the rows of one molecule, or
+ * every row but that molecule's (the two halves of a concentration sweep).
+ */
+export type RowSelection = { moleculeId: number; only: boolean } | null
+
+/**
+ * Per-row widths that fix how lines are represented, instead of each line's own Voigt HWHM:
+ * whether a weak line is widened (`conditionHalfWidthCm` < P·step) and the level its core is first
+ * evaluated on (`coreHalfWidthCm`). A sweep gives every reference amount the same ones.
+ */
+export interface LineRepresentation {
+  conditionHalfWidthCm: Float64Array
+  coreHalfWidthCm: Float64Array
+}
+
+/** `voigtHalfWidthCm` without its argument checks, for the inner loop (Olivero & Longbothum 1977). */
+function voigtHalfWidthOf(alphaD: number, gamma: number): number {
+  return 0.5346 * gamma + Math.sqrt(0.2166 * gamma * gamma + alphaD * alphaD)
+}
+
+/**
+ * The Doppler HWHM a pair is deposited with: its own, or for a weak pair whose width
+ * (`conditionHalfWidthCm`) is below P points per local step, the smoothing width when larger.
+ */
+export function representedDopplerHalfWidthCm(
+  kind: number,
+  conditionHalfWidthCm: number,
+  alphaD: number,
+  gamma: number,
+  stepCm: number,
+  pointsPerHalfWidth: number,
+): number {
+  if (kind !== WEAK || !(conditionHalfWidthCm < pointsPerHalfWidth * stepCm)) return alphaD
+  const width = smoothingDopplerWidthCm(gamma, stepCm)
+  return width > alphaD ? width : alphaD
+}
+
+/** The Voigt HWHM a pair is deposited with (after any widening). */
+export function representedVoigtHalfWidthCm(
+  kind: number,
+  conditionHalfWidthCm: number,
+  state: LayerLineState,
+  row: number,
+  stepCm: number,
+  pointsPerHalfWidth: number,
+): number {
+  const alphaD = state.dopplerHalfWidthCm[row]
+  const gamma = state.lorentzHalfWidthCm[row]
+  const represented = representedDopplerHalfWidthCm(kind, conditionHalfWidthCm, alphaD, gamma, stepCm, pointsPerHalfWidth)
+  return represented === alphaD ? state.voigtHalfWidthCm[row] : voigtHalfWidthOf(represented, gamma)
+}
+
+/** Adds the selected active lines of one layer (weak unresolved ones widened) to the accumulators. */
 function depositLayer(
   ws: MaskedMultigrid,
   state: LayerLineState,
@@ -480,27 +533,38 @@ function depositLayer(
   options: ResolvedAdaptiveOptions,
   reachLoCm: number,
   reachHiCm: number,
+  selection: RowSelection,
+  representation: LineRepresentation | null,
 ): number {
   const cutoff = options.wingCutoffCm
   const P = options.pointsPerHalfWidth
+  const selectedMolecule = selection ? selection.moleculeId : -1
+  const selectOnly = selection ? selection.only : true
   let widened = 0
   for (let i = 0; i < state.length; i++) {
     const kind = flags[i]
     if (kind === DROPPED) continue
+    if (selectedMolecule >= 0 && (moleculeId[i] === selectedMolecule) !== selectOnly) continue
     const strength = state.integratedOpticalDepthCm[i]
     const centre = state.centreCm[i]
     if (centre < reachLoCm || centre > reachHiCm) continue
-    let alphaD = state.dopplerHalfWidthCm[i]
     const gamma = state.lorentzHalfWidthCm[i]
-    let alphaV = state.voigtHalfWidthCm[i]
-    if (kind === WEAK && alphaV < P * stepNearLine[i]) {
-      const width = smoothingDopplerWidthCm(gamma, stepNearLine[i])
-      if (width > alphaD) {
-        alphaD = width
-        alphaV = 0.5346 * gamma + Math.sqrt(0.2166 * gamma * gamma + alphaD * alphaD)
-        widened++
-      }
+    const unwidenedHalfWidth = state.voigtHalfWidthCm[i]
+    // The discrete choices (widening, core level) may follow widths given by the caller; see depositLayerLines.
+    const alphaD = representedDopplerHalfWidthCm(
+      kind,
+      representation ? representation.conditionHalfWidthCm[i] : unwidenedHalfWidth,
+      state.dopplerHalfWidthCm[i],
+      gamma,
+      stepNearLine[i],
+      P,
+    )
+    let alphaV = unwidenedHalfWidth
+    if (alphaD !== state.dopplerHalfWidthCm[i]) {
+      alphaV = voigtHalfWidthOf(alphaD, gamma)
+      widened++
     }
+    const coreWidth = representation ? representation.coreHalfWidthCm[i] : alphaV
     const scale = SQRT_LN2 / alphaD
     const y = gamma * scale
     const amplitude = (strength * SQRT_LN2_OVER_PI) / alphaD
@@ -513,7 +577,7 @@ function depositLayer(
     }
     const coreLevel = maskedCoreLevel(
       ws,
-      alphaV,
+      coreWidth,
       kind === WEAK ? options.weakCorePointsPerHalfWidth : options.corePointsPerHalfWidth,
     )
     const rho = kind === WEAK ? options.weakNearZoneCoarseSteps : options.nearZoneCoarseSteps
@@ -533,6 +597,314 @@ function depositLayer(
     )
   }
   return widened
+}
+
+/** Validated inputs of one adaptive chunk, shared by single runs and sweeps. */
+export interface AdaptiveChunkSetup {
+  startCm: number
+  endCm: number
+  options: ResolvedAdaptiveOptions
+  coarseStepCm: number
+  /** Lines that can reach the chunk (a slice of the table, sorted by wavenumber). */
+  slice: LineTable
+  lookups: {
+    partitionFunctionLookup: PartitionFunctionLookup | undefined
+    molarMassLookup: MolarMassLookup | undefined
+  }
+  /** 2πB(ν*, T_ref) per slice row: the flux bound per unit integrated optical depth, W m⁻² per cm⁻¹. */
+  fluxPerArea: Float64Array
+}
+
+/**
+ * Checks the chunk bounds and layers, resolves the options and slices the lines that can reach
+ * the chunk. Method: bookkeeping (see `computeAdaptiveChunkOpticalDepth`). Source: —.
+ */
+export function setupAdaptiveChunk(input: AdaptiveChunkOpticalDepthInput): AdaptiveChunkSetup {
+  const { lines, layers, startCm, endCm } = input
+  assertFiniteInRange('startCm', startCm, Number.MIN_VALUE, Infinity)
+  assertFiniteInRange('endCm', endCm, startCm, Infinity)
+  if (!(endCm > startCm)) {
+    throw new PhysicsError('INVALID_ARGUMENT', 'endCm must be greater than startCm', {
+      startCm,
+      endCm,
+    })
+  }
+  if (!Array.isArray(layers)) throw new PhysicsError('INVALID_ARGUMENT', 'layers must be an array')
+  layers.forEach((layer, index) => validateLayerForOptics(layer, index))
+  const options = resolveOptions(input.options ?? {}, endCm - startCm)
+  const cutoff = options.wingCutoffCm
+  const ratio = options.coarseningRatio
+  const rho = options.nearZoneCoarseSteps
+  const topStepBoundCm = (ratio * cutoff) / (rho * ratio - 2 * ratio - 1)
+  const margin = cutoff + MAX_PRESSURE_SHIFT_CM + 3 * topStepBoundCm
+  const slice = sliceLineTableByWavenumber(lines, startCm - margin, endCm + margin)
+  validateLineTable(slice)
+  let referenceTemperatureK = options.referenceTemperatureK ?? 0
+  if (options.referenceTemperatureK === null) {
+    for (const layer of layers)
+      referenceTemperatureK = Math.max(referenceTemperatureK, layer.meanTemperatureK)
+    referenceTemperatureK += 30
+  }
+  const fluxPerArea = new Float64Array(slice.length)
+  for (let i = 0; i < slice.length; i++) {
+    fluxPerArea[i] =
+      2 * Math.PI * planckRadianceWavenumber(slice.wavenumberCm[i], referenceTemperatureK)
+  }
+  return {
+    startCm,
+    endCm,
+    options,
+    coarseStepCm: coarseStepFor(options.unitCm, options.maxCoarseStepCm),
+    slice,
+    lookups: {
+      partitionFunctionLookup: options.partitionFunctionLookup,
+      molarMassLookup: options.molarMassLookup,
+    },
+    fluxPerArea,
+  }
+}
+
+/** The line state of every slice row in one layer. */
+export function adaptiveLayerLineState(
+  setup: AdaptiveChunkSetup,
+  layer: AtmosphereLayer,
+): LayerLineState {
+  const state = createLayerLineState(setup.slice.length)
+  computeLayerLineState(setup.slice, layer, state, setup.lookups)
+  return state
+}
+
+/** Scratch and running totals of `classifyLayerPairs` over the layers of a chunk. */
+export interface PairClassification {
+  bounds: Float64Array
+  bins: Uint16Array
+  binSums: Float64Array
+  activeLineLayerCount: number
+  significantLineLayerCount: number
+  droppedLineLayerCount: number
+  droppedFluxBoundWPerM2: number
+  /** Per slice row: narrowest significant Voigt HWHM and the range of its shifted centres. */
+  narrowestCm: Float64Array
+  centreLoCm: Float64Array
+  centreHiCm: Float64Array
+}
+
+export function createPairClassification(rowCount: number): PairClassification {
+  return {
+    bounds: new Float64Array(rowCount),
+    bins: new Uint16Array(rowCount),
+    binSums: new Float64Array(BOUND_BINS),
+    activeLineLayerCount: 0,
+    significantLineLayerCount: 0,
+    droppedLineLayerCount: 0,
+    droppedFluxBoundWPerM2: 0,
+    narrowestCm: new Float64Array(rowCount).fill(Infinity),
+    centreLoCm: new Float64Array(rowCount).fill(Infinity),
+    centreHiCm: new Float64Array(rowCount).fill(-Infinity),
+  }
+}
+
+/**
+ * Flags of one layer's (line, layer) pairs — SIGNIFICANT (τ₀ ≥ ε), WEAK, or DROPPED (negligible,
+ * within the layer's budget) — and the grid requirements of the significant ones.
+ * Method: see the module comment. Source: as `computeAdaptiveChunkOpticalDepth`.
+ */
+export function classifyLayerPairs(
+  setup: AdaptiveChunkSetup,
+  state: LayerLineState,
+  layer: AtmosphereLayer,
+  totals: PairClassification,
+): Uint8Array {
+  const { options } = setup
+  const n = state.length
+  const { bounds } = totals
+  totals.activeLineLayerCount += state.activeCount
+  const flags = new Uint8Array(n)
+  for (let i = 0; i < n; i++) {
+    const strength = state.integratedOpticalDepthCm[i]
+    if (!(strength > 0)) continue
+    flags[i] = peakOpticalDepth(state, i) < options.significantPeakOpticalDepth ? WEAK : SIGNIFICANT
+    bounds[i] = setup.fluxPerArea[i] * strength
+  }
+  const heatingToFlux = DRY_AIR_CP_J_PER_KG_K / (STANDARD_GRAVITY_M_PER_S2 * SECONDS_PER_DAY)
+  const deltaPressurePa = Math.max(0, layer.pressureBottomPa - layer.pressureTopPa)
+  const budget =
+    (setup.endCm - setup.startCm) *
+    Math.min(
+      options.negligibleFluxWPerM2PerCm,
+      options.negligibleHeatingKPerDayPerCm * heatingToFlux * deltaPressurePa,
+    )
+  totals.droppedFluxBoundWPerM2 += dropNegligiblePairs(
+    bounds,
+    totals.bins,
+    flags,
+    n,
+    budget,
+    totals.binSums,
+  )
+  for (let i = 0; i < n; i++) {
+    if (flags[i] === DROPPED) {
+      if (state.integratedOpticalDepthCm[i] > 0) totals.droppedLineLayerCount++
+      continue
+    }
+    if (flags[i] !== SIGNIFICANT) continue
+    totals.significantLineLayerCount++
+    noteSignificantPair(totals, state, i)
+  }
+  return flags
+}
+
+/** Adds the width and centre of a significant pair to the grid requirements of its line. */
+export function noteSignificantPair(
+  totals: PairClassification,
+  state: LayerLineState,
+  row: number,
+): void {
+  const width = state.voigtHalfWidthCm[row]
+  if (width < totals.narrowestCm[row]) totals.narrowestCm[row] = width
+  const centre = state.centreCm[row]
+  if (centre < totals.centreLoCm[row]) totals.centreLoCm[row] = centre
+  if (centre > totals.centreHiCm[row]) totals.centreHiCm[row] = centre
+}
+
+/** True when the pair is resolved by the grid. */
+export function isSignificantPair(flags: Uint8Array, row: number): boolean {
+  return flags[row] === SIGNIFICANT
+}
+
+/** The adaptive grid of the chunk from the requirements of the lines significant somewhere. */
+export function planChunkGrid(
+  setup: AdaptiveChunkSetup,
+  totals: PairClassification,
+): AdaptiveSpectralGrid {
+  const { narrowestCm, centreLoCm, centreHiCm } = totals
+  const n = narrowestCm.length
+  let count = 0
+  for (let i = 0; i < n; i++) if (narrowestCm[i] < Infinity) count++
+  const requirements = {
+    count,
+    centreCm: new Float64Array(count),
+    spreadCm: new Float64Array(count),
+    halfWidthCm: new Float64Array(count),
+  }
+  for (let i = 0, r = 0; i < n; i++) {
+    if (!(narrowestCm[i] < Infinity)) continue
+    requirements.centreCm[r] = 0.5 * (centreLoCm[i] + centreHiCm[i])
+    requirements.spreadCm[r] = 0.5 * (centreHiCm[i] - centreLoCm[i])
+    requirements.halfWidthCm[r] = narrowestCm[i]
+    r++
+  }
+  return planAdaptiveGrid(requirements, {
+    startCm: setup.startCm,
+    endCm: setup.endCm,
+    coarseStepCm: setup.coarseStepCm,
+    minStepCm: setup.options.minStepCm,
+    pointsPerHalfWidth: setup.options.pointsPerHalfWidth,
+    gradingHalfWidths: setup.options.gradingHalfWidths,
+  })
+}
+
+/** The masked multi-level workspace of a chunk's grid, reused for every layer deposit. */
+export interface AdaptiveDepositor {
+  setup: AdaptiveChunkSetup
+  grid: AdaptiveSpectralGrid
+  ws: MaskedMultigrid
+  /** Grid spacing near each slice row (at its unshifted position), cm⁻¹. */
+  stepNearLine: Float64Array
+  /** Lines whose centre is outside [reachLoCm, reachHiCm] touch no masked node. */
+  reachLoCm: number
+  reachHiCm: number
+  widenedLineLayerCount: number
+}
+
+export function createAdaptiveDepositor(
+  setup: AdaptiveChunkSetup,
+  grid: AdaptiveSpectralGrid,
+): AdaptiveDepositor {
+  const cutoff = setup.options.wingCutoffCm
+  const ws = createMaskedMultigrid(
+    setup.startCm,
+    grid.baseStepCm,
+    grid.refinementLevels,
+    grid.nodeIndex,
+    setup.options.coarseningRatio,
+    setup.options.nearZoneCoarseSteps,
+    cutoff,
+  )
+  const reach = cutoff + 3 * ws.stepCm[ws.levelCount - 1]
+  const n = setup.slice.length
+  // The ±5-point reach of localStepCm covers the pressure shift.
+  const stepNearLine = new Float64Array(n)
+  for (let i = 0; i < n; i++)
+    stepNearLine[i] = localStepCm(grid.wavenumberCm, setup.slice.wavenumberCm[i])
+  return {
+    setup,
+    grid,
+    ws,
+    stepNearLine,
+    reachLoCm: setup.startCm - reach,
+    reachHiCm: setup.endCm + reach,
+    widenedLineLayerCount: 0,
+  }
+}
+
+/**
+ * Line optical depth of one layer at the grid points (no continuum): the selected rows of the
+ * state with their flags, summed by the masked multi-level scheme into `out`.
+ * `representation` (optional) replaces each line's Voigt HWHM where a discrete choice depends on
+ * it — whether a weak line is widened, the level its core is evaluated on — so that a sweep's
+ * reference amounts all represent a line the same way and its optical depth varies smoothly
+ * between them.
+ */
+export function depositLayerLines(
+  depositor: AdaptiveDepositor,
+  state: LayerLineState,
+  flags: Uint8Array,
+  layerTemperatureK: number,
+  selection: RowSelection,
+  out: Float64Array,
+  representation: LineRepresentation | null = null,
+): void {
+  const { ws, setup } = depositor
+  clearMaskedAccumulators(ws)
+  depositor.widenedLineLayerCount += depositLayer(
+    ws,
+    state,
+    setup.slice.moleculeId,
+    layerWingWeights(setup.options.lineWingWeights, layerTemperatureK),
+    flags,
+    depositor.stepNearLine,
+    setup.options,
+    depositor.reachLoCm,
+    depositor.reachHiCm,
+    selection,
+    representation,
+  )
+  interpolateMaskedLevels(ws)
+  extractMaskedPoints(ws, out)
+}
+
+/** Bookkeeping of a chunk computed from its setup, classification and depositor. */
+export function adaptiveOpticsStats(
+  depositor: AdaptiveDepositor,
+  totals: PairClassification,
+): AdaptiveOpticalDepthStats {
+  const { grid, ws, setup } = depositor
+  return {
+    pointCount: grid.wavenumberCm.length,
+    coarseStepCm: setup.coarseStepCm,
+    finestStepCm: grid.baseStepCm,
+    refinementLevels: grid.refinementLevels,
+    levelCount: ws.levelCount,
+    maskedNodeCount: maskedNodeCount(ws),
+    lineCount: setup.slice.length,
+    activeLineLayerCount: totals.activeLineLayerCount,
+    significantLineLayerCount: totals.significantLineLayerCount,
+    widenedLineLayerCount: depositor.widenedLineLayerCount,
+    droppedLineLayerCount: totals.droppedLineLayerCount,
+    droppedFluxBoundWPerM2: totals.droppedFluxBoundWPerM2,
+    voigtEvaluations: ws.voigtEvaluations,
+  }
 }
 
 /**
@@ -560,179 +932,29 @@ function depositLayer(
 export function computeAdaptiveChunkOpticalDepth(
   input: AdaptiveChunkOpticalDepthInput,
 ): AdaptiveChunkOpticalDepthResult {
-  const { lines, layers, startCm, endCm } = input
-  assertFiniteInRange('startCm', startCm, Number.MIN_VALUE, Infinity)
-  assertFiniteInRange('endCm', endCm, startCm, Infinity)
-  if (!(endCm > startCm)) {
-    throw new PhysicsError('INVALID_ARGUMENT', 'endCm must be greater than startCm', {
-      startCm,
-      endCm,
-    })
-  }
-  if (!Array.isArray(layers)) throw new PhysicsError('INVALID_ARGUMENT', 'layers must be an array')
-  layers.forEach((layer, index) => validateLayerForOptics(layer, index))
-  const options = resolveOptions(input.options ?? {}, endCm - startCm)
-  const cutoff = options.wingCutoffCm
-  const coarseStepCm = coarseStepFor(options.unitCm, options.maxCoarseStepCm)
-
-  // Line states of every layer, for lines that can reach the chunk.
-  const ratio = options.coarseningRatio
-  const rho = options.nearZoneCoarseSteps
-  const topStepBoundCm = (ratio * cutoff) / (rho * ratio - 2 * ratio - 1)
-  const margin = cutoff + MAX_PRESSURE_SHIFT_CM + 3 * topStepBoundCm
-  const slice = sliceLineTableByWavenumber(lines, startCm - margin, endCm + margin)
-  validateLineTable(slice)
-  const lookups = {
-    partitionFunctionLookup: options.partitionFunctionLookup,
-    molarMassLookup: options.molarMassLookup,
-  }
+  const setup = setupAdaptiveChunk(input)
+  const { layers } = input
+  const totals = createPairClassification(setup.slice.length)
   const states: LayerLineState[] = []
-  const kinds: Uint8Array[] = []
-  const n = slice.length
-  const narrowest = new Float64Array(n).fill(Infinity)
-  const centreLo = new Float64Array(n).fill(Infinity)
-  const centreHi = new Float64Array(n).fill(-Infinity)
-  const bounds = new Float64Array(n)
-  const bins = new Uint16Array(n)
-  const binSums = new Float64Array(BOUND_BINS)
-  // 2πB(ν*, T_ref) per line (the flux bound per unit integrated optical depth).
-  const fluxPerArea = new Float64Array(n)
-  let referenceTemperatureK = options.referenceTemperatureK ?? 0
-  if (options.referenceTemperatureK === null) {
-    for (const layer of layers)
-      referenceTemperatureK = Math.max(referenceTemperatureK, layer.meanTemperatureK)
-    referenceTemperatureK += 30
-  }
-  for (let i = 0; i < n; i++) {
-    fluxPerArea[i] =
-      2 * Math.PI * planckRadianceWavenumber(slice.wavenumberCm[i], referenceTemperatureK)
-  }
-  const chunkWidthCm = endCm - startCm
-  const heatingToFlux = DRY_AIR_CP_J_PER_KG_K / (STANDARD_GRAVITY_M_PER_S2 * SECONDS_PER_DAY)
-  let activeLineLayerCount = 0
-  let significantLineLayerCount = 0
-  let droppedLineLayerCount = 0
-  let droppedFluxBoundWPerM2 = 0
-  for (let k = 0; k < layers.length; k++) {
-    const state = createLayerLineState(n)
-    computeLayerLineState(slice, layers[k], state, lookups)
+  const flags: Uint8Array[] = []
+  for (const layer of layers) {
+    const state = adaptiveLayerLineState(setup, layer)
     states.push(state)
-    activeLineLayerCount += state.activeCount
-    const flags = new Uint8Array(n)
-    for (let i = 0; i < n; i++) {
-      const strength = state.integratedOpticalDepthCm[i]
-      if (!(strength > 0)) continue
-      flags[i] =
-        peakOpticalDepth(state, i) < options.significantPeakOpticalDepth ? WEAK : SIGNIFICANT
-      bounds[i] = fluxPerArea[i] * strength
-    }
-    const layer = layers[k]
-    const deltaPressurePa = Math.max(0, layer.pressureBottomPa - layer.pressureTopPa)
-    const budget =
-      chunkWidthCm *
-      Math.min(
-        options.negligibleFluxWPerM2PerCm,
-        options.negligibleHeatingKPerDayPerCm * heatingToFlux * deltaPressurePa,
-      )
-    droppedFluxBoundWPerM2 += dropNegligiblePairs(bounds, bins, flags, n, budget, binSums)
-    for (let i = 0; i < n; i++) {
-      if (flags[i] === DROPPED) {
-        if (state.integratedOpticalDepthCm[i] > 0) droppedLineLayerCount++
-        continue
-      }
-      if (flags[i] !== SIGNIFICANT) continue
-      significantLineLayerCount++
-      const width = state.voigtHalfWidthCm[i]
-      if (width < narrowest[i]) narrowest[i] = width
-      const centre = state.centreCm[i]
-      if (centre < centreLo[i]) centreLo[i] = centre
-      if (centre > centreHi[i]) centreHi[i] = centre
-    }
-    kinds.push(flags)
+    flags.push(classifyLayerPairs(setup, state, layer, totals))
   }
-
-  // Grid requirements of lines that are significant somewhere.
-  let count = 0
-  for (let i = 0; i < n; i++) if (narrowest[i] < Infinity) count++
-  const requirements = {
-    count,
-    centreCm: new Float64Array(count),
-    spreadCm: new Float64Array(count),
-    halfWidthCm: new Float64Array(count),
-  }
-  for (let i = 0, r = 0; i < n; i++) {
-    if (!(narrowest[i] < Infinity)) continue
-    requirements.centreCm[r] = 0.5 * (centreLo[i] + centreHi[i])
-    requirements.spreadCm[r] = 0.5 * (centreHi[i] - centreLo[i])
-    requirements.halfWidthCm[r] = narrowest[i]
-    r++
-  }
-  const grid = planAdaptiveGrid(requirements, {
-    startCm,
-    endCm,
-    coarseStepCm,
-    minStepCm: options.minStepCm,
-    pointsPerHalfWidth: options.pointsPerHalfWidth,
-    gradingHalfWidths: options.gradingHalfWidths,
-  })
-
-  const ws = createMaskedMultigrid(
-    startCm,
-    grid.baseStepCm,
-    grid.refinementLevels,
-    grid.nodeIndex,
-    ratio,
-    rho,
-    cutoff,
-  )
-  // Lines farther than this from the chunk touch no masked node.
-  const topStep = ws.stepCm[ws.levelCount - 1]
-  const reach = cutoff + 3 * topStep
-  const pointCount = grid.wavenumberCm.length
-  // Grid spacing near each line (at its unshifted position; the ±5-point reach covers the shift).
-  const stepNearLine = new Float64Array(n)
-  for (let i = 0; i < n; i++)
-    stepNearLine[i] = localStepCm(grid.wavenumberCm, slice.wavenumberCm[i])
+  const grid = planChunkGrid(setup, totals)
+  const depositor = createAdaptiveDepositor(setup, grid)
   const opticalDepth: Float64Array[] = []
-  let widened = 0
   for (let k = 0; k < layers.length; k++) {
-    clearMaskedAccumulators(ws)
-    widened += depositLayer(
-      ws,
-      states[k],
-      slice.moleculeId,
-      layerWingWeights(options.lineWingWeights, layers[k].meanTemperatureK),
-      kinds[k],
-      stepNearLine,
-      options,
-      startCm - reach,
-      endCm + reach,
-    )
-    interpolateMaskedLevels(ws)
-    const tau = new Float64Array(pointCount)
-    extractMaskedPoints(ws, tau)
-    applyContinuumHooks(options.continuum, grid.wavenumberCm, layers[k], k, tau)
+    const tau = new Float64Array(grid.wavenumberCm.length)
+    depositLayerLines(depositor, states[k], flags[k], layers[k].meanTemperatureK, null, tau)
+    applyContinuumHooks(setup.options.continuum, grid.wavenumberCm, layers[k], k, tau)
     opticalDepth.push(tau)
   }
-
   return {
     grid,
     wavenumberCm: grid.wavenumberCm,
     opticalDepth,
-    stats: {
-      pointCount,
-      coarseStepCm,
-      finestStepCm: grid.baseStepCm,
-      refinementLevels: grid.refinementLevels,
-      levelCount: ws.levelCount,
-      maskedNodeCount: maskedNodeCount(ws),
-      lineCount: n,
-      activeLineLayerCount,
-      significantLineLayerCount,
-      widenedLineLayerCount: widened,
-      droppedLineLayerCount,
-      droppedFluxBoundWPerM2,
-      voigtEvaluations: ws.voigtEvaluations,
-    },
+    stats: adaptiveOpticsStats(depositor, totals),
   }
 }

@@ -5,7 +5,7 @@
  * this file only fixes the hook shape and applies a list of hooks.
  */
 import { PhysicsError } from '../errors'
-import type { AtmosphereLayer } from '../types'
+import type { AtmosphereLayer, GasId } from '../types'
 
 /**
  * A continuum term. It must ADD its vertical optical depth (dimensionless) of `layer` at every
@@ -13,12 +13,24 @@ import type { AtmosphereLayer } from '../types'
  * but its arguments (so that chunks stay independent and deterministic). `layerIndex` is the index
  * of the layer in the list given to the optics (0 = surface layer).
  */
-export type ContinuumHook = (
+export type ContinuumHook = ((
   wavenumberCm: Float64Array,
   layer: AtmosphereLayer,
   layerIndex: number,
   out: Float64Array,
-) => void
+) => void) & {
+  /**
+   * The gases whose amounts the hook reads (besides the layer's pressure, temperature and air
+   * column). Undeclared means "any": a concentration sweep then applies the hook per member
+   * instead of once.
+   */
+  readonly gases?: readonly GasId[]
+}
+
+/** True unless the hook declares the gases it reads and `gas` is not one of them. */
+export function continuumHookReadsGas(hook: ContinuumHook, gas: GasId): boolean {
+  return hook.gases === undefined || hook.gases.includes(gas)
+}
 
 /** Throws INVALID_ARGUMENT unless `hooks` is an array of functions. */
 export function validateContinuumHooks(hooks: readonly ContinuumHook[]): void {

@@ -38,6 +38,11 @@ export interface ColumnTransferInput {
   quadrature: AngleQuadrature
   /** Source inside a layer; default 'linear-in-tau'. */
   layerSource?: LayerSourceMode
+  /**
+   * Planck radiances already computed by `levelPlanckTable` for this grid, temperatures and
+   * surface (optional: runs that share them — the members of a sweep — compute them once).
+   */
+  levelPlanckTable?: Float64Array
 }
 
 /** Point-major outputs of one block of wavenumbers (allocate with `createColumnTransferBlock`). */
@@ -129,6 +134,27 @@ function planck(nuCm: number, temperatureK: number): number {
   }
   const e = expNegative(x)
   return (C1L_W_PER_M2_SR_CM4 * nuCm * nuCm * nuCm * e) / (1 - e)
+}
+
+/**
+ * Planck radiance at every level and at the surface for every grid point, point-major:
+ * [point·(nLevels + 1) + level], the surface last. Bit-identical to the values the solver computes
+ * itself. Method: `planck` per entry. Units: W m⁻² sr⁻¹ (cm⁻¹)⁻¹. Source: as `solveColumnTransfer`.
+ */
+export function levelPlanckTable(
+  wavenumberCm: Float64Array,
+  levelTemperatureK: ArrayLike<number>,
+  surfaceTemperatureK: number,
+): Float64Array {
+  const stride = levelTemperatureK.length + 1
+  const table = new Float64Array(wavenumberCm.length * stride)
+  for (let p = 0; p < wavenumberCm.length; p++) {
+    const nu = wavenumberCm[p]
+    const base = p * stride
+    for (let l = 0; l < stride - 1; l++) table[base + l] = planck(nu, levelTemperatureK[l])
+    table[base + stride - 1] = planck(nu, surfaceTemperatureK)
+  }
+  return table
 }
 
 function validate(input: ColumnTransferInput, block: ColumnTransferBlock): number {
@@ -249,6 +275,13 @@ export function solveColumnTransfer(
   const tauRows = input.layerOpticalDepth
   const { planckLevel, planckLayer, transmittance, phi, fluxUp, fluxDown } = block
   const toSpace = block.transmittanceToSpace
+  const table = input.levelPlanckTable
+  if (table !== undefined && table.length !== n * (nLevels + 1)) {
+    throw new PhysicsError('INVALID_ARGUMENT', 'levelPlanckTable must hold nLevels + 1 values per grid point', {
+      length: table.length,
+      expected: n * (nLevels + 1),
+    })
+  }
 
   for (let j = 0; j < count; j++) {
     const p = firstPoint + j
@@ -256,8 +289,15 @@ export function solveColumnTransfer(
     if (!(nu > 0 && nu < Infinity)) {
       throw new PhysicsError('OUT_OF_RANGE', `wavenumberCm[${p}] = ${nu} must be finite and > 0`)
     }
-    for (let l = 0; l < nLevels; l++) planckLevel[l] = planck(nu, levelT[l])
-    const surfacePlanck = planck(nu, input.surfaceTemperatureK)
+    let surfacePlanck: number
+    if (table === undefined) {
+      for (let l = 0; l < nLevels; l++) planckLevel[l] = planck(nu, levelT[l])
+      surfacePlanck = planck(nu, input.surfaceTemperatureK)
+    } else {
+      const base = p * (nLevels + 1)
+      for (let l = 0; l < nLevels; l++) planckLevel[l] = table[base + l]
+      surfacePlanck = table[base + nLevels]
+    }
     if (!linear) {
       for (let k = 0; k < nLayers; k++)
         planckLayer[k] = planck(nu, 0.5 * (levelT[k] + levelT[k + 1]))
