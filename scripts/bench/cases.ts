@@ -4,18 +4,19 @@
 //    built-in catalogue, default settings (adaptive method), fluxes at every level and OLR spectrum.
 // B  scaling on a sub-range: the catalogue ×1, ×4, ×16 (lines duplicated at small offsets, S/k),
 //    and 30 / 60 / 120 layers.
-// C  forcing and sweep on a sub-range: CO₂ ×1 and ×2 (two runs, compareRuns), and a CO₂ sweep
-//    of 8 runs.
+// C  forcing and sweep on sub-ranges: CO₂ ×1 and ×2 (compareRuns), and a CO₂ sweep of 8
+//    amounts, each as independent runs and computed together (shared optics), with the speed-up
+//    and the largest differences between the two.
 // D  brute force against the adaptive method on a narrow window: speed ratio and the flux and
 //    heating-rate errors (the brute-force 'reference' method sums every line at every point of a
 //    uniform grid of a quarter of the narrowest half width); the engine's previous fast path
 //    ('uniform': same grid, multi-level optics) is timed too.
 import { compareRuns } from '../../shared/physics/engine'
-import type { ComputeSettings } from '../../shared/physics/engine'
+import type { ComputeSettings, RadiationResult } from '../../shared/physics/engine'
 import type { LineTable } from '../../shared/physics/spectroscopy/line'
 import type { AtmosphereProfile } from '../../shared/physics/types'
 import { midLatitudeSummer, scaledCatalogue, withCo2Scaled, type Catalogue } from './inputs'
-import { compareResults, measureRun, type RunMeasurement } from './measure'
+import { compareResults, measureRun, measureSweep, type RunMeasurement } from './measure'
 
 export interface BenchRow {
   case: string
@@ -107,77 +108,107 @@ export function caseB(options: CaseOptions): BenchRow[] {
   return rows
 }
 
-/** Case C: forcing of doubled CO₂ (two runs) and a CO₂ sweep (8 runs) on a sub-range. */
+/** Largest flux and heating-rate differences of each sweep member from its own run. */
+function sweepAgreement(together: readonly RadiationResult[], alone: readonly RadiationResult[]) {
+  let flux = 0
+  let heating = 0
+  together.forEach((member, m) => {
+    const d = compareResults(member, alone[m])
+    flux = Math.max(flux, d.maxFluxErrorWPerM2)
+    heating = Math.max(heating, d.maxHeatingErrorKPerDay)
+  })
+  return { maxFluxDifferenceWPerM2: flux, maxHeatingDifferenceKPerDay: heating }
+}
+
+/** Sums the measurements of runs done one after the other. */
+function totalOf(measurements: readonly RunMeasurement[]): RunMeasurement {
+  const sum = (pick: (m: RunMeasurement) => number) => measurements.reduce((s, m) => s + pick(m), 0)
+  const wallS = sum((m) => m.wallS)
+  return {
+    wallS,
+    cpuS: sum((m) => m.cpuS),
+    peakRssMiB: Math.max(...measurements.map((m) => m.peakRssMiB)),
+    chunkCount: sum((m) => m.chunkCount),
+    gridPointCount: sum((m) => m.gridPointCount),
+    lineLayerPairs: sum((m) => m.lineLayerPairs),
+    voigtEvaluations: sum((m) => m.voigtEvaluations),
+    lineLayerPairsPerS: sum((m) => m.lineLayerPairs) / wallS,
+    gridPointsPerS: sum((m) => m.gridPointCount) / wallS,
+    slowestChunk: { startCm: NaN, cpuS: NaN },
+  }
+}
+
+/**
+ * Case C: forcing of doubled CO₂ and an 8-amount CO₂ sweep on sub-ranges, each computed twice —
+ * as independent runs and with the members together (engine/compute-sweep.ts) — with the speed
+ * ratio and the largest differences between the two.
+ */
 export function caseC(options: CaseOptions): BenchRow[] {
   const range = options.quick ? { startCm: 640, endCm: 700 } : { startCm: 500, endCm: 850 }
   const profile = midLatitudeSummer(60)
   const rows: BenchRow[] = []
-  const before = run(
-    `CO₂ ×1, ${range.startCm}–${range.endCm}`,
-    'C',
-    profile,
-    options.catalogue.table,
-    range,
-    options,
+  const pair = [profile, withCo2Scaled(profile, 2)]
+  const alone = pair.map((p, i) =>
+    run(`CO₂ ×${i + 1}, ${range.startCm}–${range.endCm}`, 'C', p, options.catalogue.table, range, options),
   )
-  const after = run(
-    `CO₂ ×2, ${range.startCm}–${range.endCm}`,
-    'C',
-    withCo2Scaled(profile, 2),
-    options.catalogue.table,
-    range,
-    options,
-  )
-  const forcing = compareRuns(before.result, after.result)
-  after.row.notes = {
+  const forcing = compareRuns(alone[0].result, alone[1].result)
+  alone[1].row.notes = {
     toaForcingWPerM2: forcing.toaWPerM2,
     tropopauseForcingWPerM2: forcing.tropopauseWPerM2,
     surfaceForcingWPerM2: forcing.surfaceWPerM2,
   }
-  rows.push(before.row, after.row)
-  const sweepRange = options.quick ? { startCm: 660, endCm: 680 } : { startCm: 600, endCm: 750 }
-  const factors = options.quick ? [0.5, 2] : [0.25, 0.5, 1, 1.5, 2, 4, 8, 16]
-  let wallS = 0
-  let cpuS = 0
-  let peak = 0
-  let points = 0
-  let pairs = 0
-  let evaluations = 0
-  const olr: number[] = []
-  for (const factor of factors) {
-    const r = run(
-      `sweep CO₂ ×${factor}`,
-      'C',
-      withCo2Scaled(profile, factor),
-      options.catalogue.table,
-      sweepRange,
-      options,
-    )
-    wallS += r.row.measurement.wallS
-    cpuS += r.row.measurement.cpuS
-    peak = Math.max(peak, r.row.measurement.peakRssMiB)
-    points += r.row.measurement.gridPointCount
-    pairs += r.row.measurement.lineLayerPairs
-    evaluations += r.row.measurement.voigtEvaluations
-    olr.push(r.result.olrWPerM2)
-  }
+  rows.push(alone[0].row, alone[1].row)
+  options.log(`  C: CO₂ ×1 and ×2 together …`)
+  const together = measureSweep(pair, options.catalogue.table, range, 'CO2')
+  const forcingTogether = compareRuns(together.results[0], together.results[1])
   rows.push({
     case: 'C',
-    label: `sweep of ${factors.length} CO₂ amounts, ${sweepRange.startCm}–${sweepRange.endCm}`,
-    measurement: {
-      wallS,
-      cpuS,
-      peakRssMiB: peak,
-      chunkCount: 0,
-      gridPointCount: points,
-      lineLayerPairs: pairs,
-      voigtEvaluations: evaluations,
-      lineLayerPairsPerS: pairs / wallS,
-      gridPointsPerS: points / wallS,
-      slowestChunk: { startCm: NaN, cpuS: NaN },
+    label: `CO₂ ×1 and ×2 together, ${range.startCm}–${range.endCm}`,
+    measurement: together.measurement,
+    notes: {
+      toaForcingWPerM2: forcingTogether.toaWPerM2,
+      toaForcingDifferenceWPerM2: forcingTogether.toaWPerM2 - forcing.toaWPerM2,
+      speedUpOverIndependent:
+        (alone[0].row.measurement.wallS + alone[1].row.measurement.wallS) / together.measurement.wallS,
+      ...sweepAgreement(together.results, [alone[0].result, alone[1].result]),
     },
-    notes: { co2Factors: factors.join(' '), olrWPerM2: olr.map((v) => v.toFixed(4)).join(' ') },
   })
+  options.log(`    ${together.measurement.wallS.toFixed(2)} s wall`)
+
+  const sweepRange = options.quick ? { startCm: 660, endCm: 680 } : { startCm: 600, endCm: 750 }
+  const factors = options.quick ? [0.5, 2] : [0.25, 0.5, 1, 1.5, 2, 4, 8, 16]
+  const profiles = factors.map((factor) => withCo2Scaled(profile, factor))
+  const members = profiles.map((p, m) =>
+    run(`sweep CO₂ ×${factors[m]}`, 'C', p, options.catalogue.table, sweepRange, options),
+  )
+  const label = `sweep of ${factors.length} CO₂ amounts, ${sweepRange.startCm}–${sweepRange.endCm}`
+  const independent = totalOf(members.map((m) => m.row.measurement))
+  rows.push({
+    case: 'C',
+    label: `${label}, independent runs`,
+    measurement: independent,
+    notes: {
+      co2Factors: factors.join(' '),
+      olrWPerM2: members.map((m) => m.result.olrWPerM2.toFixed(4)).join(' '),
+    },
+  })
+  options.log(`  C: ${label} together …`)
+  const sweep = measureSweep(profiles, options.catalogue.table, sweepRange, 'CO2')
+  rows.push({
+    case: 'C',
+    label: `${label}, together`,
+    measurement: sweep.measurement,
+    notes: {
+      co2Factors: factors.join(' '),
+      olrWPerM2: sweep.results.map((r) => r.olrWPerM2.toFixed(4)).join(' '),
+      speedUpOverIndependent: independent.wallS / sweep.measurement.wallS,
+      ...sweepAgreement(
+        sweep.results,
+        members.map((m) => m.result),
+      ),
+    },
+  })
+  options.log(`    ${sweep.measurement.wallS.toFixed(2)} s wall`)
   return rows
 }
 

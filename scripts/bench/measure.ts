@@ -3,14 +3,17 @@
 // and the work the chunks report (line-layer pairs, Voigt evaluations, grid points).
 import {
   computeChunk,
+  computeSweepChunk,
   mergeChunkResults,
   prepareComputation,
+  prepareSweep,
+  type ChunkBounds,
   type ChunkResult,
   type ComputeSettings,
   type RadiationResult,
 } from '../../shared/physics/engine'
 import type { LineTable } from '../../shared/physics/spectroscopy/line'
-import type { AtmosphereProfile } from '../../shared/physics/types'
+import type { AtmosphereProfile, GasId } from '../../shared/physics/types'
 
 export interface RunMeasurement {
   wallS: number
@@ -42,54 +45,89 @@ function cpuSeconds(since: NodeJS.CpuUsage): number {
   return (used.user + used.system) / 1e6
 }
 
+/**
+ * Runs `compute` on every chunk in order and measures it; `compute` returns the chunk's result
+ * for every member (one for a run), and the work counters are those of the first (shared by the
+ * members of a sweep), the grid points those of all members (each is solved).
+ */
+function measureChunks(
+  chunks: readonly ChunkBounds[],
+  memberCount: number,
+  compute: (chunk: ChunkBounds) => ChunkResult[],
+) {
+  const cpuStart = process.cpuUsage()
+  const wallStart = performance.now()
+  let peak = rssMiB()
+  const perMember: ChunkResult[][] = Array.from({ length: memberCount }, () => [])
+  let gridPointCount = 0
+  let lineLayerPairs = 0
+  let voigtEvaluations = 0
+  const slowestChunk = { startCm: NaN, cpuS: 0 }
+  for (const chunk of chunks) {
+    const chunkCpu = process.cpuUsage()
+    const results = compute(chunk)
+    const seconds = cpuSeconds(chunkCpu)
+    if (seconds > slowestChunk.cpuS) {
+      slowestChunk.cpuS = seconds
+      slowestChunk.startCm = chunk.startCm
+    }
+    results.forEach((result, m) => {
+      perMember[m].push(result)
+      gridPointCount += result.gridPointCount
+    })
+    lineLayerPairs += results[0].work?.lineLayerCount ?? 0
+    voigtEvaluations += results[0].work?.voigtEvaluations ?? 0
+    peak = Math.max(peak, rssMiB())
+  }
+  return {
+    perMember,
+    finish(): RunMeasurement {
+      const wallS = (performance.now() - wallStart) / 1000
+      return {
+        wallS,
+        cpuS: cpuSeconds(cpuStart),
+        peakRssMiB: Math.max(peak, rssMiB()),
+        chunkCount: chunks.length,
+        gridPointCount,
+        lineLayerPairs,
+        voigtEvaluations,
+        lineLayerPairsPerS: lineLayerPairs / wallS,
+        gridPointsPerS: gridPointCount / wallS,
+        slowestChunk,
+      }
+    },
+  }
+}
+
 /** Computes and measures one run (single thread, chunks in order). */
 export function measureRun(
   profile: AtmosphereProfile,
   lines: LineTable,
   settings: Partial<ComputeSettings>,
 ): MeasuredRun {
-  const cpuStart = process.cpuUsage()
-  const wallStart = performance.now()
-  let peak = rssMiB()
   const prepared = prepareComputation(profile, lines, settings)
-  const results: ChunkResult[] = []
-  let gridPointCount = 0
-  let lineLayerPairs = 0
-  let voigtEvaluations = 0
-  const slowestChunk = { startCm: NaN, cpuS: 0 }
-  for (const chunk of prepared.chunks) {
-    const chunkCpu = process.cpuUsage()
-    const result = computeChunk(prepared, chunk)
-    const seconds = cpuSeconds(chunkCpu)
-    if (seconds > slowestChunk.cpuS) {
-      slowestChunk.cpuS = seconds
-      slowestChunk.startCm = chunk.startCm
-    }
-    results.push(result)
-    gridPointCount += result.gridPointCount
-    lineLayerPairs += result.work?.lineLayerCount ?? 0
-    voigtEvaluations += result.work?.voigtEvaluations ?? 0
-    peak = Math.max(peak, rssMiB())
-  }
-  const result = mergeChunkResults(prepared, results)
-  const wallS = (performance.now() - wallStart) / 1000
-  const cpuS = cpuSeconds(cpuStart)
-  peak = Math.max(peak, rssMiB())
-  return {
-    result,
-    measurement: {
-      wallS,
-      cpuS,
-      peakRssMiB: peak,
-      chunkCount: prepared.chunks.length,
-      gridPointCount,
-      lineLayerPairs,
-      voigtEvaluations,
-      lineLayerPairsPerS: lineLayerPairs / wallS,
-      gridPointsPerS: gridPointCount / wallS,
-      slowestChunk,
-    },
-  }
+  const run = measureChunks(prepared.chunks, 1, (chunk) => [computeChunk(prepared, chunk)])
+  const result = mergeChunkResults(prepared, run.perMember[0])
+  return { result, measurement: run.finish() }
+}
+
+export interface MeasuredSweep {
+  results: RadiationResult[]
+  independentReason: string | null
+  measurement: RunMeasurement
+}
+
+/** Computes and measures a sweep with its members together (single thread, chunks in order). */
+export function measureSweep(
+  profiles: readonly AtmosphereProfile[],
+  lines: LineTable,
+  settings: Partial<ComputeSettings>,
+  sweptGas: GasId,
+): MeasuredSweep {
+  const sweep = prepareSweep(profiles, lines, settings, sweptGas)
+  const run = measureChunks(sweep.chunks, profiles.length, (chunk) => computeSweepChunk(sweep, chunk))
+  const results = sweep.members.map((prepared, m) => mergeChunkResults(prepared, run.perMember[m]))
+  return { results, independentReason: sweep.independentReason, measurement: run.finish() }
 }
 
 /** Largest |a − b| over two arrays of equal length. */

@@ -1,32 +1,44 @@
 import { parseArgs } from 'node:util'
-import { compareRuns, computeRadiation } from '../../shared/physics/engine/compute'
-import type { MixtureGases } from '../../shared/schemas/mixtures'
-import { CliError, printJson, requireNumber } from './args'
+import { compareRuns } from '../../shared/physics/engine/compute'
+import { computeSweep } from '../../shared/physics/engine/compute-sweep'
+import { printJson, requireNumber } from './args'
 import { CAUTIONS } from './cautions'
-import { catalogueLines, gasesFromOptions, profileFromOptions, progressPrinter, scenarioHelp, scenarioOptionSpec, settingsFromOptions, withGases } from './scenario-options'
+import {
+  catalogueLines,
+  changeableGasOption,
+  gasesFromOptions,
+  profileFromOptions,
+  profileWithAmount,
+  progressPrinter,
+  scenarioHelp,
+  scenarioOptionSpec,
+  settingsFromOptions,
+} from './scenario-options'
 
 export const forcingHelp = `tauline forcing --gas co2|ch4|n2o --from AMOUNT --to AMOUNT [options] [--json]
   Instantaneous clear-sky forcing of changing one gas (ppmv for CO₂, ppbv for CH₄ and N₂O): the
   reduction of net upward flux at the top, the tropopause and the surface, and its spectrum.
 ${scenarioHelp}`
 
-const GAS_UNITS = { co2: { id: 'CO2', unit: 'ppmv', factor: 1e-6 }, ch4: { id: 'CH4', unit: 'ppbv', factor: 1e-9 }, n2o: { id: 'N2O', unit: 'ppbv', factor: 1e-9 } } as const
-
 export function forcingCommand(argv: string[]): void {
   const { values } = parseArgs({ args: argv, options: { ...scenarioOptionSpec, gas: { type: 'string' }, from: { type: 'string' }, to: { type: 'string' } } })
-  const gasKey = String(values.gas ?? '').toLowerCase() as keyof typeof GAS_UNITS
-  const gas = GAS_UNITS[gasKey]
-  if (!gas) throw new CliError(`--gas must be co2, ch4 or n2o; got "${values.gas ?? ''}"`)
+  const gas = changeableGasOption(values)
   const from = requireNumber(values, 'from')
   const to = requireNumber(values, 'to')
   const base = profileFromOptions(values)
   const others = gasesFromOptions(values)
-  const at = (amount: number): MixtureGases => ({ ...others, [gas.id]: { mode: 'uniform', vmr: amount * gas.factor } })
   const settings = settingsFromOptions(values)
   const { table, checksum, lineCount } = catalogueLines()
   const t0 = Date.now()
-  const before = computeRadiation(withGases(base, at(from)), table, settings, progressPrinter(values.quiet!, `${gas.id} ${from} ${gas.unit}`))
-  const after = computeRadiation(withGases(base, at(to)), table, settings, progressPrinter(values.quiet!, `${gas.id} ${to} ${gas.unit}`))
+  // The two runs share everything that does not depend on the gas (engine/compute-sweep.ts).
+  const { members } = computeSweep(
+    [from, to].map((amount) => profileWithAmount(base, others, gas, amount)),
+    table,
+    settings,
+    gas.id,
+    progressPrinter(values.quiet!, `${gas.id} ${from} and ${to} ${gas.unit}`),
+  )
+  const [before, after] = members
   const f = compareRuns(before, after)
   const wallSeconds = (Date.now() - t0) / 1000
   if (values.json) {

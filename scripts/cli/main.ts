@@ -6,11 +6,13 @@ import { computeCommand, computeHelp } from './compute-command'
 import { forcingCommand, forcingHelp } from './forcing-command'
 import { planckCommand, planckHelp } from './planck-command'
 import { runCommand, runHelp } from './run-command'
+import { sweepCommand, sweepHelp } from './sweep-command'
 
 const commands: Record<string, { run: (argv: string[]) => void | Promise<void>; help: string }> = {
   planck: { run: planckCommand, help: planckHelp },
   compute: { run: computeCommand, help: computeHelp },
   forcing: { run: forcingCommand, help: forcingHelp },
+  sweep: { run: sweepCommand, help: sweepHelp },
   run: { run: runCommand, help: runHelp },
   catalogue: { run: catalogueCommand, help: catalogueHelp },
   bench: { run: benchCommand, help: benchHelp },

@@ -86,6 +86,33 @@ export function gasesFromOptions(v: Values): MixtureGases {
   return gases
 }
 
+/** Gases a forcing or a sweep may change, with the unit their amounts are given in. */
+export const CHANGEABLE_GASES = {
+  co2: { id: 'CO2', unit: 'ppmv', factor: 1e-6 },
+  ch4: { id: 'CH4', unit: 'ppbv', factor: 1e-9 },
+  n2o: { id: 'N2O', unit: 'ppbv', factor: 1e-9 },
+} as const
+
+export type ChangeableGas = (typeof CHANGEABLE_GASES)[keyof typeof CHANGEABLE_GASES]
+
+/** The --gas option of forcing and sweep. */
+export function changeableGasOption(v: Values): ChangeableGas {
+  const key = String(v.gas ?? '').toLowerCase()
+  const gas = (CHANGEABLE_GASES as Record<string, ChangeableGas>)[key]
+  if (!gas) throw new CliError(`--gas must be co2, ch4 or n2o; got "${String(v.gas ?? '')}"`)
+  return gas
+}
+
+/** The profile with `gas` at a uniform amount (in the gas's unit) and the other command-line changes. */
+export function profileWithAmount(
+  base: AtmosphereProfile,
+  others: MixtureGases,
+  gas: ChangeableGas,
+  amount: number,
+): AtmosphereProfile {
+  return withGases(base, { ...others, [gas.id]: { mode: 'uniform', vmr: amount * gas.factor } })
+}
+
 export function withGases(profile: AtmosphereProfile, gases: MixtureGases): AtmosphereProfile {
   return applyMixture(profile, gases).profile
 }

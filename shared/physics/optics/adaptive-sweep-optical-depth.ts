@@ -205,6 +205,7 @@ function widthSpread(a: LayerLineState, b: LayerLineState, rows: Int32Array): nu
 function layerReferences(
   setup: AdaptiveChunkSetup,
   envelope: AtmosphereLayer,
+  envelopeState: LayerLineState,
   gas: GasId,
   memberLayers: readonly (readonly AtmosphereLayer[])[],
   k: number,
@@ -217,8 +218,11 @@ function layerReferences(
   if (!(columnUnit > 0)) {
     return { states: [], weights: vmrs.map(() => []), pieceSpread: 0 }
   }
+  // At the envelope's own mixing ratio the reference is the envelope layer itself.
   const stateAt = (vmr: number) =>
-    adaptiveLayerLineState(setup, withSweptAmount(envelope, gas, columnUnit, vmr))
+    vmr === envelope.meanVmr[gas]
+      ? envelopeState
+      : adaptiveLayerLineState(setup, withSweptAmount(envelope, gas, columnUnit, vmr))
   const distinct = [...new Set(vmrs)].sort((a, b) => a - b)
   const lo = distinct[0]
   const hi = distinct[distinct.length - 1]
@@ -353,6 +357,7 @@ export function computeAdaptiveSweepOpticalDepth(
     const layerRefs = layerReferences(
       setup,
       envelope,
+      state,
       sweptGas,
       memberLayers,
       k,

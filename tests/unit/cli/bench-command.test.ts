@@ -1,17 +1,6 @@
-import { spawn } from 'node:child_process'
 import { describe, expect, it } from 'vitest'
 import { parseBenchArguments } from '../../../scripts/bench/run-bench'
-
-function tauline(args: string[]): Promise<{ code: number; stdout: string; stderr: string }> {
-  return new Promise((resolve) => {
-    const child = spawn(process.execPath, ['scripts/tauline.mjs', ...args])
-    let stdout = ''
-    let stderr = ''
-    child.stdout.on('data', (d) => (stdout += d))
-    child.stderr.on('data', (d) => (stderr += d))
-    child.on('close', (code) => resolve({ code: code ?? -1, stdout, stderr }))
-  })
-}
+import { tauline } from '../../support/tauline-cli'
 
 // The benchmark's command line; what it measures is read by people, not asserted here.
 describe('tauline bench', () => {
