@@ -18,6 +18,7 @@ const configSchema = z.object({
   LOG_LEVEL: z.enum(['debug', 'info', 'warn', 'error', 'silent']).default('info'),
   // Empty means "not set" (one thread per core), not 0.
   RUN_WORKER_THREADS: z.preprocess((v) => (v === '' ? undefined : v), z.coerce.number().int().min(0).max(256).optional()),
+  RUN_CHUNKS_AHEAD: z.coerce.number().int().min(0).max(8).default(1),
   RUN_CHUNK_TIMEOUT_S: z.coerce.number().int().min(2).max(86400).default(900),
   RUN_RETRY_LIMIT: z.coerce.number().int().min(0).max(10).default(2),
   QUEUE_MAINTENANCE_S: z.coerce.number().int().min(1).max(3600).default(30),
@@ -38,6 +39,8 @@ export interface AppConfig {
   runs: {
     /** Chunk threads in this process; undefined = one per core, 0 = submit only. */
     workerThreads?: number
+    /** Chunk jobs a process takes beyond its threads, so the database work of the next overlaps a compute. */
+    chunksAhead: number
     chunkTimeoutSeconds: number
     retryLimit: number
     maintenanceIntervalSeconds: number
@@ -67,6 +70,7 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     logLevel: c.LOG_LEVEL,
     runs: {
       workerThreads: c.RUN_WORKER_THREADS,
+      chunksAhead: c.RUN_CHUNKS_AHEAD,
       chunkTimeoutSeconds: c.RUN_CHUNK_TIMEOUT_S,
       retryLimit: c.RUN_RETRY_LIMIT,
       maintenanceIntervalSeconds: c.QUEUE_MAINTENANCE_S,

@@ -6,16 +6,19 @@ import { processChunkJob } from './chunk-processor'
 import { CHUNK_QUEUE, type ChunkJobData, type RunQueue } from './run-queue'
 
 /**
- * Subscribes this process to the chunk queue with one polling loop per pool thread, so a machine
- * takes as many chunks at a time as it has threads. Any number of processes, on any machines
- * reaching the same database, can do this.
+ * Subscribes this process to the chunk queue with one polling loop per pool thread plus
+ * `chunksAhead` more, so a machine takes as many chunks at a time as it has threads and holds
+ * the next one ready: the database work of a chunk (taking the job, marking it, storing the last
+ * result) then overlaps another chunk's compute instead of leaving the thread idle. Any number of
+ * processes, on any machines reaching the same database, can do this.
  */
 export async function startChunkWorkers(
   queue: RunQueue,
   deps: { sequelize: Sequelize; pool: ChunkPool; logger: Logger },
+  chunksAhead = 1,
   workerName = `${hostname()}:${process.pid}`,
 ): Promise<void> {
-  for (let i = 0; i < deps.pool.size; i++) {
+  for (let i = 0; i < deps.pool.size + chunksAhead; i++) {
     const loop: { id?: string } = {}
     loop.id = await queue.boss.work<ChunkJobData>(
       CHUNK_QUEUE,
@@ -32,5 +35,5 @@ export async function startChunkWorkers(
       },
     )
   }
-  deps.logger.info(`chunk workers ready: ${deps.pool.size} thread(s) on ${workerName}`)
+  deps.logger.info(`chunk workers ready: ${deps.pool.size} thread(s), ${chunksAhead} chunk(s) ahead, on ${workerName}`)
 }

@@ -29,7 +29,7 @@ export async function startRunSystem(
     maintenanceIntervalSeconds: config.runs.maintenanceIntervalSeconds,
   })
   const pool = threads === 0 ? undefined : createChunkPool(threads)
-  if (pool) await startChunkWorkers(queue, { sequelize, pool, logger })
+  if (pool) await startChunkWorkers(queue, { sequelize, pool, logger }, config.runs.chunksAhead)
   return {
     queue,
     pool,

@@ -161,12 +161,15 @@ export function solveAdaptiveChunk(
     right: new Float64Array(nGrid),
   })
 
-  const fluxUpBinned = new Float64Array(binCount * nLevels)
-  const fluxDownBinned = new Float64Array(binCount * nLevels)
-  const transmittanceToSpaceBinned = new Float64Array(binCount * nLevels)
-  const toaNadirRadianceBinned = new Float64Array(binCount)
-  const surfaceZenithRadianceBinned = new Float64Array(binCount)
-  const binWidth = new Float64Array(binCount)
+  const bins = createBinnedOutputs(binCount, nLevels)
+  const {
+    fluxUpBinned,
+    fluxDownBinned,
+    transmittanceToSpaceBinned,
+    toaNadirRadianceBinned,
+    surfaceZenithRadianceBinned,
+    binWidth,
+  } = bins
 
   const input = {
     wavenumberCm: nu,
@@ -235,54 +238,71 @@ export function solveAdaptiveChunk(
       fluxDownWPerM2[l] += fluxDownBinned[base + l]
     }
   }
-  normaliseBins(
-    binWidth,
+  return finishChunk(chunk, nGrid, bins, fluxUpWPerM2, fluxDownWPerM2, detail, work)
+}
+
+/** A chunk's outputs per output bin while they are summed: weighted sums, then bin means. */
+interface BinnedOutputs {
+  nLevels: number
+  fluxUpBinned: Float64Array
+  fluxDownBinned: Float64Array
+  transmittanceToSpaceBinned: Float64Array
+  toaNadirRadianceBinned: Float64Array
+  surfaceZenithRadianceBinned: Float64Array
+  /** Sum of the integration weights of each bin (its width once every point is in), cm⁻¹. */
+  binWidth: Float64Array
+}
+
+function createBinnedOutputs(binCount: number, nLevels: number): BinnedOutputs {
+  return {
     nLevels,
-    fluxUpBinned,
-    fluxDownBinned,
-    transmittanceToSpaceBinned,
-    toaNadirRadianceBinned,
-    surfaceZenithRadianceBinned,
-  )
+    fluxUpBinned: new Float64Array(binCount * nLevels),
+    fluxDownBinned: new Float64Array(binCount * nLevels),
+    transmittanceToSpaceBinned: new Float64Array(binCount * nLevels),
+    toaNadirRadianceBinned: new Float64Array(binCount),
+    surfaceZenithRadianceBinned: new Float64Array(binCount),
+    binWidth: new Float64Array(binCount),
+  }
+}
+
+/** Turns bin integrals into bin means (bins without points stay 0) and assembles the result. */
+function finishChunk(
+  chunk: ChunkBounds,
+  gridPointCount: number,
+  bins: BinnedOutputs,
+  fluxUpWPerM2: Float64Array,
+  fluxDownWPerM2: Float64Array,
+  detail: DetailSpectrum | undefined,
+  work: ChunkWorkStats,
+): ChunkResult {
+  const { binWidth, nLevels } = bins
+  for (let bin = 0; bin < binWidth.length; bin++) {
+    const inv = binWidth[bin] > 0 ? 1 / binWidth[bin] : 0
+    bins.toaNadirRadianceBinned[bin] *= inv
+    bins.surfaceZenithRadianceBinned[bin] *= inv
+    const base = bin * nLevels
+    for (let l = 0; l < nLevels; l++) {
+      bins.fluxUpBinned[base + l] *= inv
+      bins.fluxDownBinned[base + l] *= inv
+      bins.transmittanceToSpaceBinned[base + l] *= inv
+    }
+  }
   return {
     chunkIndex: chunk.index,
     startCm: chunk.startCm,
     endCm: chunk.endCm,
     firstBin: chunk.firstBin,
-    binCount,
-    gridPointCount: nGrid,
+    binCount: chunk.binCount,
+    gridPointCount,
     fluxUpWPerM2,
     fluxDownWPerM2,
-    fluxUpBinned,
-    fluxDownBinned,
-    toaNadirRadianceBinned,
-    surfaceZenithRadianceBinned,
-    transmittanceToSpaceBinned,
+    fluxUpBinned: bins.fluxUpBinned,
+    fluxDownBinned: bins.fluxDownBinned,
+    toaNadirRadianceBinned: bins.toaNadirRadianceBinned,
+    surfaceZenithRadianceBinned: bins.surfaceZenithRadianceBinned,
+    transmittanceToSpaceBinned: bins.transmittanceToSpaceBinned,
     ...(detail ? { detail } : {}),
     work,
-  }
-}
-
-/** Divides bin integrals by the bin widths (bins without points stay 0). */
-function normaliseBins(
-  binWidth: Float64Array,
-  nLevels: number,
-  fluxUp: Float64Array,
-  fluxDown: Float64Array,
-  transmittance: Float64Array,
-  toa: Float64Array,
-  surface: Float64Array,
-): void {
-  for (let bin = 0; bin < binWidth.length; bin++) {
-    const inv = binWidth[bin] > 0 ? 1 / binWidth[bin] : 0
-    toa[bin] *= inv
-    surface[bin] *= inv
-    const base = bin * nLevels
-    for (let l = 0; l < nLevels; l++) {
-      fluxUp[base + l] *= inv
-      fluxDown[base + l] *= inv
-      transmittance[base + l] *= inv
-    }
   }
 }
 
@@ -364,12 +384,15 @@ function computeUniformChunk(
   })
 
   const binCount = chunk.binCount
-  const fluxUpBinned = new Float64Array(binCount * nLevels)
-  const fluxDownBinned = new Float64Array(binCount * nLevels)
-  const transmittanceToSpaceBinned = new Float64Array(binCount * nLevels)
-  const toaNadirRadianceBinned = new Float64Array(binCount)
-  const surfaceZenithRadianceBinned = new Float64Array(binCount)
-  const binWeight = new Float64Array(binCount)
+  const bins = createBinnedOutputs(binCount, nLevels)
+  const {
+    fluxUpBinned,
+    fluxDownBinned,
+    transmittanceToSpaceBinned,
+    toaNadirRadianceBinned,
+    surfaceZenithRadianceBinned,
+    binWidth: binWeight,
+  } = bins
   const transmittance = new Float64Array(nLevels)
 
   const detailRange = detailPointRange(grid, chunk, settings.detailWindow)
@@ -420,31 +443,13 @@ function computeUniformChunk(
       }
     }
   }
-  normaliseBins(
-    binWeight,
-    nLevels,
-    fluxUpBinned,
-    fluxDownBinned,
-    transmittanceToSpaceBinned,
-    toaNadirRadianceBinned,
-    surfaceZenithRadianceBinned,
-  )
-
-  return {
-    chunkIndex: chunk.index,
-    startCm: chunk.startCm,
-    endCm: chunk.endCm,
-    firstBin: chunk.firstBin,
-    binCount,
-    gridPointCount: nGrid,
-    fluxUpWPerM2: Float64Array.from(solution.fluxUpWPerM2),
-    fluxDownWPerM2: Float64Array.from(solution.fluxDownWPerM2),
-    fluxUpBinned,
-    fluxDownBinned,
-    toaNadirRadianceBinned,
-    surfaceZenithRadianceBinned,
-    transmittanceToSpaceBinned,
-    ...(detail ? { detail } : {}),
+  return finishChunk(
+    chunk,
+    nGrid,
+    bins,
+    Float64Array.from(solution.fluxUpWPerM2),
+    Float64Array.from(solution.fluxDownWPerM2),
+    detail,
     work,
-  }
+  )
 }
