@@ -1,10 +1,10 @@
 import { writeFileSync } from 'node:fs'
 import { parseArgs } from 'node:util'
 import Papa from 'papaparse'
-import { computeRadiation } from '../../shared/physics/engine/compute'
 import { CliError, parseRange, printJson, printTable } from './args'
 import { CAUTIONS } from './cautions'
-import { catalogueLines, gasesFromOptions, profileFromOptions, progressPrinter, scenarioHelp, scenarioOptionSpec, settingsFromOptions, withGases } from './scenario-options'
+import { catalogueLines, gasesFromOptions, profileFromOptions, progressPrinter, scenarioHelp, scenarioOptionSpec, settingsFromOptions, threadsFromOptions, withGases } from './scenario-options'
+import { computeOnThreads } from './threaded-compute'
 
 export const computeHelp = `tauline compute [atmosphere, gas and spectrum options] [--spectrum-out FILE.csv]
                [--window START:END --window-out FILE.csv] [--json]
@@ -16,7 +16,7 @@ ${scenarioHelp}
   --window-out FILE.csv    write that window: every grid point (not evenly spaced) with OLR, surface
                            downward flux, nadir radiance, brightness temperature, column transmittance`
 
-export function computeCommand(argv: string[]): void {
+export async function computeCommand(argv: string[]): Promise<void> {
   const { values } = parseArgs({
     args: argv,
     options: { ...scenarioOptionSpec, 'spectrum-out': { type: 'string' }, window: { type: 'string' }, 'window-out': { type: 'string' } },
@@ -30,7 +30,10 @@ export function computeCommand(argv: string[]): void {
     settings.detailWindow = { startCm, endCm }
   }
   const t0 = Date.now()
-  const r = computeRadiation(profile, catalogue.table, settings, progressPrinter(values.quiet!, 'computing'))
+  // One profile: nothing is swept (the gas named is not used).
+  const {
+    members: [r],
+  } = await computeOnThreads([profile], catalogue, settings, 'CO2', threadsFromOptions(values), progressPrinter(values.quiet!, 'computing'))
   const wallSeconds = (Date.now() - t0) / 1000
   const spectrumRows = Array.from(r.wavenumberCm, (w, i) => ({
     'wavenumber_cm-1': w,

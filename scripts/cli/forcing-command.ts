@@ -1,6 +1,5 @@
 import { parseArgs } from 'node:util'
 import { compareRuns } from '../../shared/physics/engine/compute'
-import { computeSweep } from '../../shared/physics/engine/compute-sweep'
 import { printJson, requireNumber } from './args'
 import { CAUTIONS } from './cautions'
 import {
@@ -13,14 +12,16 @@ import {
   scenarioHelp,
   scenarioOptionSpec,
   settingsFromOptions,
+  threadsFromOptions,
 } from './scenario-options'
+import { computeOnThreads } from './threaded-compute'
 
 export const forcingHelp = `tauline forcing --gas co2|ch4|n2o --from AMOUNT --to AMOUNT [options] [--json]
   Instantaneous clear-sky forcing of changing one gas (ppmv for CO₂, ppbv for CH₄ and N₂O): the
   reduction of net upward flux at the top, the tropopause and the surface, and its spectrum.
 ${scenarioHelp}`
 
-export function forcingCommand(argv: string[]): void {
+export async function forcingCommand(argv: string[]): Promise<void> {
   const { values } = parseArgs({ args: argv, options: { ...scenarioOptionSpec, gas: { type: 'string' }, from: { type: 'string' }, to: { type: 'string' } } })
   const gas = changeableGasOption(values)
   const from = requireNumber(values, 'from')
@@ -28,14 +29,16 @@ export function forcingCommand(argv: string[]): void {
   const base = profileFromOptions(values)
   const others = gasesFromOptions(values)
   const settings = settingsFromOptions(values)
-  const { table, checksum, lineCount } = catalogueLines()
+  const catalogue = catalogueLines()
+  const { checksum, lineCount } = catalogue
   const t0 = Date.now()
   // The two runs share everything that does not depend on the gas (engine/compute-sweep.ts).
-  const { members } = computeSweep(
+  const { members } = await computeOnThreads(
     [from, to].map((amount) => profileWithAmount(base, others, gas, amount)),
-    table,
+    catalogue,
     settings,
     gas.id,
+    threadsFromOptions(values),
     progressPrinter(values.quiet!, `${gas.id} ${from} and ${to} ${gas.unit}`),
   )
   const [before, after] = members

@@ -39,6 +39,12 @@ async function main(argv: string[]) {
   await command.run(rest)
 }
 
+// Output piped into a program that stops reading (`| head`) ends the command quietly.
+process.stdout.on('error', (err: NodeJS.ErrnoException) => {
+  if (err.code === 'EPIPE') process.exit(0)
+  throw err
+})
+
 try {
   await main(process.argv.slice(2))
 } catch (err) {

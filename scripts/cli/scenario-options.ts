@@ -1,4 +1,5 @@
 import { readFileSync } from 'node:fs'
+import { availableParallelism } from 'node:os'
 import { loadBuiltInCatalogue } from '../../server/catalogue/builtin-catalogue'
 import { applyMixture } from '../../shared/mixtures/apply-mixture'
 import type { ComputeSettings } from '../../shared/physics/engine/settings'
@@ -27,6 +28,7 @@ export const scenarioOptionSpec = {
   cutoff: { type: 'string' },
   quadrature: { type: 'string' },
   'no-continuum': { type: 'boolean', default: false },
+  threads: { type: 'string' },
   json: { type: 'boolean', default: false },
   quiet: { type: 'boolean', default: false },
 } as const
@@ -40,6 +42,7 @@ export const scenarioHelp = `  Atmosphere:  --atmosphere ID (us-standard-1976, t
   Spectrum:    --range START:END cm⁻¹ (10:3000), --resolution CM (1, output bins), --chunk CM (20),
                --cutoff CM (25, line wings), --quadrature gauss-legendre:N | gauss-jacobi:N | diffusivity
                (gauss-legendre:3), --no-continuum
+  Threads:     --threads N (one per core): chunks computed in parallel, same numbers as one thread
   Output:      --json (machine-readable), --quiet (no progress on stderr)`
 
 type Values = Record<string, string | boolean | undefined>
@@ -134,6 +137,15 @@ export function settingsFromOptions(v: Values): Partial<ComputeSettings> {
     else throw new CliError(`--quadrature must be gauss-legendre:N, gauss-jacobi:N or diffusivity; got "${String(v.quadrature)}"`)
   }
   return settings
+}
+
+/** --threads: worker threads for the chunks (default one per core). */
+export function threadsFromOptions(v: Values): number {
+  const threads = requireNumber(v, 'threads', availableParallelism())
+  if (!Number.isInteger(threads) || threads < 1 || threads > 256) {
+    throw new CliError(`--threads must be a whole number from 1 to 256, got "${String(v.threads)}"`)
+  }
+  return threads
 }
 
 export function catalogueLines() {

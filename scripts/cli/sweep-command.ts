@@ -1,7 +1,6 @@
 import { parseArgs } from 'node:util'
-import { compareRuns, computeRadiation, type ForcingComparison } from '../../shared/physics/engine/compute'
+import { compareRuns, type ForcingComparison } from '../../shared/physics/engine/compute'
 import type { RadiationResult } from '../../shared/physics/engine/merge'
-import { computeSweep } from '../../shared/physics/engine/compute-sweep'
 import { fitLogarithmicForcing, type LogFitResult } from '../../shared/physics/diagnostics/log-fit'
 import { CliError, printJson, printTable, requireNumber } from './args'
 import { CAUTIONS } from './cautions'
@@ -15,7 +14,9 @@ import {
   scenarioHelp,
   scenarioOptionSpec,
   settingsFromOptions,
+  threadsFromOptions,
 } from './scenario-options'
+import { computeOnThreads } from './threaded-compute'
 
 export const sweepHelp = `tauline sweep --gas co2|ch4|n2o --amounts A,B,... [--reference AMOUNT] [--independent] [options] [--json]
   Runs with one gas at each amount (uniform; ppmv for CO₂, ppbv for CH₄ and N₂O), computed together
@@ -45,7 +46,7 @@ interface LevelForcing {
   fit: LogFitResult | null
 }
 
-export function sweepCommand(argv: string[]): void {
+export async function sweepCommand(argv: string[]): Promise<void> {
   const { values } = parseArgs({
     args: argv,
     options: {
@@ -65,7 +66,9 @@ export function sweepCommand(argv: string[]): void {
   const base = profileFromOptions(values)
   const others = gasesFromOptions(values)
   const settings = settingsFromOptions(values)
-  const { table, checksum, lineCount } = catalogueLines()
+  const catalogue = catalogueLines()
+  const { checksum, lineCount } = catalogue
+  const threads = threadsFromOptions(values)
   const profiles = members.map((amount) => profileWithAmount(base, others, gas, amount))
   const label = `${gas.id} sweep, ${members.length} amounts`
   const started = Date.now()
@@ -73,13 +76,15 @@ export function sweepCommand(argv: string[]): void {
   let opticsShared: boolean
   let independentReason: string | null
   if (values.independent) {
-    results = profiles.map((profile, m) =>
-      computeRadiation(profile, table, settings, progressPrinter(values.quiet!, `${gas.id} ${members[m]} ${gas.unit}`)),
-    )
+    results = []
+    for (const [m, profile] of profiles.entries()) {
+      const progress = progressPrinter(values.quiet!, `${gas.id} ${members[m]} ${gas.unit}`)
+      results.push((await computeOnThreads([profile], catalogue, settings, gas.id, threads, progress)).members[0])
+    }
     opticsShared = false
     independentReason = 'asked for with --independent'
   } else {
-    const sweep = computeSweep(profiles, table, settings, gas.id, progressPrinter(values.quiet!, label))
+    const sweep = await computeOnThreads(profiles, catalogue, settings, gas.id, threads, progressPrinter(values.quiet!, label))
     results = sweep.members
     independentReason = sweep.independentReason
     opticsShared = independentReason === null

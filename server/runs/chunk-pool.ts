@@ -1,9 +1,11 @@
 import { availableParallelism } from 'node:os'
 import { Piscina } from 'piscina'
-import type { ChunkTask, ChunkTaskResult } from './chunk.worker'
+import type { ChunkTask, ChunkTaskResult, SweepChunkTask, SweepChunkTaskResult } from './chunk.worker'
 
 export interface ChunkPool {
   run(task: ChunkTask): Promise<ChunkTaskResult>
+  /** One chunk of every member of a sweep (engine/compute-sweep.ts). */
+  runSweep(task: SweepChunkTask): Promise<SweepChunkTaskResult>
   size: number
   destroy(): Promise<void>
 }
@@ -19,6 +21,7 @@ export function createChunkPool(threads = availableParallelism()): ChunkPool {
   })
   return {
     run: (task) => pool.run(task) as Promise<ChunkTaskResult>,
+    runSweep: (task) => pool.run(task) as Promise<SweepChunkTaskResult>,
     size: Math.max(1, threads),
     destroy: () => pool.destroy(),
   }

@@ -34,6 +34,18 @@ describe('tauline sweep', () => {
     }
   }, 60_000)
 
+  it('on two threads, gives the numbers of one thread bit for bit (chunks are independent and merged in order)', async () => {
+    const args = ['sweep', ...scenario, '--range', '640:700', '--amounts', '280,560,1120']
+    const [one, two] = await Promise.all([tauline([...args, '--threads', '1']), tauline([...args, '--threads', '2'])])
+    const a = JSON.parse(one.stdout)
+    const b = JSON.parse(two.stdout)
+    expect(b.olrWPerM2).toEqual(a.olrWPerM2)
+    expect(b.forcingWPerM2).toEqual(a.forcingWPerM2)
+    const bad = await tauline(['sweep', ...scenario, '--amounts', '1,2', '--threads', '0'])
+    expect(bad.code).toBe(2)
+    expect(bad.stderr).toMatch(/--threads must be a whole number from 1 to 256, got "0"/)
+  }, 90_000)
+
   it('names the bad item of --amounts and exits with code 2', async () => {
     expect(() => parseAmounts('280,,560')).toThrow('--amounts item 2 must be a number ≥ 0, got ""')
     expect(() => parseAmounts('280,-1')).toThrow(/item 2/)
