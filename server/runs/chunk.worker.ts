@@ -3,7 +3,7 @@
 // imported catalogue's lines, once per catalogue.
 import { computeChunk, type ChunkResult } from '../../shared/physics/engine/compute-chunk'
 import { computeSweepChunk, prepareSweep, type PreparedSweep } from '../../shared/physics/engine/compute-sweep'
-import { prepareComputation, type PreparedComputation } from '../../shared/physics/engine/prepare'
+import { prepareComputation, type ChunkBounds, type PreparedComputation } from '../../shared/physics/engine/prepare'
 import type { ComputeSettings } from '../../shared/physics/engine/settings'
 import { PhysicsError } from '../../shared/physics/errors'
 import type { AtmosphereProfile, GasId } from '../../shared/physics/types'
@@ -41,63 +41,72 @@ export type SweepChunkTaskResult =
   | { ok: true; results: ChunkResult[]; computeMs: number }
   | { ok: false; code: string; message: string }
 
-// Prepared inputs of the last few runs, so consecutive chunks of one run share the layer work.
-const preparedByHash = new Map<string, PreparedComputation>()
+// Prepared inputs of the last few runs and sweeps, so consecutive chunks share the layer work.
 const MAX_PREPARED = 4
-
-async function prepared(task: ChunkTask): Promise<PreparedComputation> {
-  let p = preparedByHash.get(task.inputHash)
-  if (!p) {
-    const table = await loadRunCatalogueTable(task.inputs.catalogue, task.database)
-    p = prepareComputation(task.inputs.profile.snapshot, table, task.inputs.settings)
-    preparedByHash.set(task.inputHash, p)
-    if (preparedByHash.size > MAX_PREPARED) preparedByHash.delete(preparedByHash.keys().next().value!)
-  }
-  return p
-}
-
+const preparedByHash = new Map<string, PreparedComputation>()
 const sweepsByKey = new Map<string, PreparedSweep>()
 
-async function preparedSweep(task: SweepChunkTask): Promise<PreparedSweep> {
-  let sweep = sweepsByKey.get(task.key)
-  if (!sweep) {
-    const table = await loadRunCatalogueTable(task.catalogue, undefined)
-    sweep = prepareSweep(task.profiles, table, task.settings, task.sweptGas)
-    sweepsByKey.set(task.key, sweep)
-    if (sweepsByKey.size > MAX_PREPARED) sweepsByKey.delete(sweepsByKey.keys().next().value!)
+/** The value remembered under `key`, else a new one (the oldest of more than MAX_PREPARED is forgotten). */
+async function remembered<V>(cache: Map<string, V>, key: string, create: () => Promise<V>): Promise<V> {
+  let value = cache.get(key)
+  if (value === undefined) {
+    value = await create()
+    cache.set(key, value)
+    if (cache.size > MAX_PREPARED) cache.delete(cache.keys().next().value!)
   }
-  return sweep
+  return value
 }
 
-async function computeSweepTask(task: SweepChunkTask): Promise<SweepChunkTaskResult> {
+type Computed<R> = { ok: true; computeMs: number; value: R } | { ok: false; code: string; message: string }
+
+/**
+ * Computes chunk `index` of prepared inputs; an input a physics check refuses, or a catalogue that
+ * cannot be read, becomes a failed result (retrying would fail the same way), anything else throws.
+ */
+async function computeChunkOf<P extends { chunks: ChunkBounds[] }, R>(
+  prepare: () => Promise<P>,
+  index: number,
+  compute: (prepared: P, chunk: ChunkBounds) => R,
+): Promise<Computed<R>> {
   try {
-    const sweep = await preparedSweep(task)
-    const chunk = sweep.chunks[task.chunkIndex]
-    if (!chunk) throw new Error(`chunk ${task.chunkIndex} does not exist (the sweep has ${sweep.chunks.length})`)
+    const prepared = await prepare()
+    const chunk = prepared.chunks[index]
+    if (!chunk) throw new Error(`chunk ${index} does not exist (there are ${prepared.chunks.length})`)
     const t0 = performance.now()
-    const results = computeSweepChunk(sweep, chunk)
-    return { ok: true, results, computeMs: performance.now() - t0 }
+    const value = compute(prepared, chunk)
+    return { ok: true, value, computeMs: performance.now() - t0 }
   } catch (err) {
     if (err instanceof PhysicsError || err instanceof CatalogueUnavailableError) return { ok: false, code: err.code, message: err.message }
     throw err
   }
-}
-
-export default async function computeRunChunk(task: ChunkTask | SweepChunkTask): Promise<ChunkTaskResult | SweepChunkTaskResult> {
-  if ('kind' in task && task.kind === 'sweep') return computeSweepTask(task)
-  return computeRunTask(task as ChunkTask)
 }
 
 async function computeRunTask(task: ChunkTask): Promise<ChunkTaskResult> {
-  try {
-    const p = await prepared(task)
-    const chunk = p.chunks[task.chunkIndex]
-    if (!chunk) throw new Error(`chunk ${task.chunkIndex} does not exist (the run has ${p.chunks.length})`)
-    const t0 = performance.now()
-    const result = computeChunk(p, chunk)
-    return { ok: true, result, computeMs: performance.now() - t0 }
-  } catch (err) {
-    if (err instanceof PhysicsError || err instanceof CatalogueUnavailableError) return { ok: false, code: err.code, message: err.message }
-    throw err
-  }
+  const outcome = await computeChunkOf(
+    () =>
+      remembered(preparedByHash, task.inputHash, async () => {
+        const table = await loadRunCatalogueTable(task.inputs.catalogue, task.database)
+        return prepareComputation(task.inputs.profile.snapshot, table, task.inputs.settings)
+      }),
+    task.chunkIndex,
+    computeChunk,
+  )
+  return outcome.ok ? { ok: true, result: outcome.value, computeMs: outcome.computeMs } : outcome
+}
+
+async function computeSweepTask(task: SweepChunkTask): Promise<SweepChunkTaskResult> {
+  const outcome = await computeChunkOf(
+    () =>
+      remembered(sweepsByKey, task.key, async () => {
+        const table = await loadRunCatalogueTable(task.catalogue, undefined)
+        return prepareSweep(task.profiles, table, task.settings, task.sweptGas)
+      }),
+    task.chunkIndex,
+    computeSweepChunk,
+  )
+  return outcome.ok ? { ok: true, results: outcome.value, computeMs: outcome.computeMs } : outcome
+}
+
+export default async function computeTask(task: ChunkTask | SweepChunkTask): Promise<ChunkTaskResult | SweepChunkTaskResult> {
+  return 'kind' in task && task.kind === 'sweep' ? computeSweepTask(task) : computeRunTask(task as ChunkTask)
 }
