@@ -302,11 +302,12 @@ function sharedRepresentation(
  * per layer; other gases deposited once; the swept gas deposited at 1 to a few reference mixing
  * ratios per layer at the envelope column and combined per member, τ_k,m = τ_k,other +
  * (u_k,m/u_k,env)·Σ_r w_r(x_k,m) τ_k,r (w linear interpolation weights, or 1 on the member's own
- * amount), then the member's continuum hooks. Notes: throws INVALID_ARGUMENT when the members'
+ * amount); continuum terms that do not read the swept gas are added once to τ_other, the others
+ * per member. Notes: throws INVALID_ARGUMENT when the members'
  * layers differ in more than the swept gas (`sweepLayersDifference`). Deterministic. Memory: the
  * other gases, the references and one member's optical depths, each layers × points doubles.
  * Source: additivity of absorption coefficients over lines and the linear pressure broadening
- * γ = (296/T)ⁿ[γ_air(p − p_s) + γ_self p_s] (Rothman et al. 1998, JQSRT 60, 665, eqs. A12–A14;
+ * γ = (296/T)ⁿ[γ_air(p − p_s) + γ_self p_s] (Rothman et al. 1998, JQSRT 60, 665, appendix;
  * from memory); linear-interpolation error bound (Burden & Faires, Numerical Analysis, thm. 3.3;
  * from memory).
  */
