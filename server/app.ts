@@ -19,6 +19,7 @@ import { mixturesRoutes } from './routes/mixtures.routes'
 import { profilesRoutes } from './routes/profiles.routes'
 import { reviewsRoutes, runReviewsRoutes } from './routes/reviews.routes'
 import { runsRoutes } from './routes/runs.routes'
+import { sweepsRoutes } from './routes/sweeps.routes'
 import type { RunQueue } from './runs/run-queue'
 import { usersRoutes } from './routes/users.routes'
 
@@ -96,6 +97,7 @@ export function createApp({ config, sequelize, sessionPool, logger, clientDistDi
   api.use('/catalogues', cataloguesRoutes())
   api.use('/runs/:id/reviews', runReviewsRoutes(sequelize))
   api.use('/runs', runsRoutes(sequelize, getRunQueue ?? (() => undefined)))
+  api.use('/sweeps', sweepsRoutes(sequelize, getRunQueue ?? (() => undefined)))
   api.use('/reviews', reviewsRoutes(sequelize))
   api.use(apiNotFound)
   app.use('/api', api)

@@ -70,6 +70,7 @@ function syntheticApi(): { run: string; results: string; detail: string; user: s
   const run: RunDetail = {
     id: RUN_ID,
     name: 'Synthetic long spectrum (bench)',
+    sweepId: null,
     status: 'succeeded',
     profileName: profile.name,
     mixtureName: null,

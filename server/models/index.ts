@@ -4,6 +4,7 @@ import { CatalogueLineBlock, LineCatalogue, initLineCatalogueModels } from './li
 import { Profile } from './profile.model'
 import { Review } from './review.model'
 import { Run, RunChunk, RunResult } from './run.model'
+import { Sweep } from './sweep.model'
 import { User } from './user.model'
 
 /** Initialises every model on a Sequelize instance; associations are wired after all exist. */
@@ -15,6 +16,7 @@ export function initModels(sequelize: Sequelize) {
   RunChunk.initModel(sequelize)
   RunResult.initModel(sequelize)
   Review.initModel(sequelize)
+  Sweep.initModel(sequelize)
 
   Profile.belongsTo(User, { as: 'owner', foreignKey: 'ownerId' })
   GasMixture.belongsTo(User, { as: 'owner', foreignKey: 'ownerId' })
@@ -25,9 +27,11 @@ export function initModels(sequelize: Sequelize) {
   Run.hasMany(Review, { as: 'reviews', foreignKey: 'runId' })
   Review.belongsTo(Run, { foreignKey: 'runId' })
   Review.belongsTo(User, { as: 'reviewer', foreignKey: 'reviewerId' })
+  Sweep.belongsTo(User, { as: 'owner', foreignKey: 'ownerId' })
+  Sweep.hasMany(Run, { as: 'members', foreignKey: 'sweepId' })
   initLineCatalogueModels(sequelize, User)
-  return { User, Profile, GasMixture, Run, RunChunk, RunResult, Review }
+  return { User, Profile, GasMixture, Run, RunChunk, RunResult, Review, Sweep }
 }
 
-export { GasMixture, Profile, Review, Run, RunChunk, RunResult, User }
+export { GasMixture, Profile, Review, Run, RunChunk, RunResult, Sweep, User }
 export { CatalogueLineBlock, LineCatalogue }

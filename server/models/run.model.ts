@@ -29,6 +29,10 @@ export class Run extends Model<InferAttributes<Run>, InferCreationAttributes<Run
   declare computeMs: CreationOptional<number>
   declare ownerId: ForeignKey<User['id']>
   declare owner?: NonAttribute<User>
+  /** The sweep the run is a member of (computed together with the other members), if any. */
+  declare sweepId: CreationOptional<number | null>
+  /** The swept gas's amount in this member, in the sweep's unit. */
+  declare sweepAmount: CreationOptional<number | null>
   declare createdAt: CreationOptional<Date>
   declare updatedAt: CreationOptional<Date>
 
@@ -48,6 +52,8 @@ export class Run extends Model<InferAttributes<Run>, InferCreationAttributes<Run
         startedAt: { type: DataTypes.DATE, allowNull: true },
         finishedAt: { type: DataTypes.DATE, allowNull: true },
         computeMs: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 0 },
+        sweepId: { type: DataTypes.INTEGER, allowNull: true, defaultValue: null },
+        sweepAmount: { type: DataTypes.DOUBLE, allowNull: true, defaultValue: null },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -29,6 +29,8 @@ export interface SweepChunkTask {
   sweptGas: GasId
   catalogue: RunInputs['catalogue']
   chunkIndex: number
+  /** Where an imported catalogue's lines are read from (unused for the built-in catalogue). */
+  database?: WorkerDatabase
 }
 
 /** A computed chunk, or a deterministic physics failure (retrying would fail the same way). */
@@ -98,7 +100,7 @@ async function computeSweepTask(task: SweepChunkTask): Promise<SweepChunkTaskRes
   const outcome = await computeChunkOf(
     () =>
       remembered(sweepsByKey, task.key, async () => {
-        const table = await loadRunCatalogueTable(task.catalogue, undefined)
+        const table = await loadRunCatalogueTable(task.catalogue, task.database)
         return prepareSweep(task.profiles, table, task.settings, task.sweptGas)
       }),
     task.chunkIndex,

@@ -59,8 +59,8 @@ export async function snapshotRunInputs(input: CreateRunInput): Promise<{ inputs
 
 /**
  * SHA-256 of the canonical inputs that decide the numbers (the profile snapshot, catalogue
- * checksum, settings and engine version) — not names or database ids, so the same physics
- * gives the same hash.
+ * checksum, settings, engine version and, for a sweep member, the sweep) — not names or database
+ * ids, so the same physics gives the same hash.
  */
 export function runInputHash(inputs: RunInputs): string {
   const physics = {
@@ -69,6 +69,8 @@ export function runInputHash(inputs: RunInputs): string {
     catalogue: inputs.catalogue.checksum,
     settings: inputs.settings,
     engineVersion: inputs.engineVersion,
+    // Only members of a sweep carry it, so the hashes of other runs stay as they were.
+    ...(inputs.sweep ? { sweep: inputs.sweep } : {}),
   }
   return createHash('sha256').update(canonicalJson(physics)).digest('hex')
 }

@@ -4,8 +4,13 @@ import type { Logger } from '../logger'
 /** Name of the pg-boss queue of chunk jobs. */
 export const CHUNK_QUEUE = 'run-chunk'
 
-export interface ChunkJobData {
-  runId: number
+/** One chunk of one run, or one chunk of every member of a sweep (computed together). */
+export type ChunkJobData = { runId: number; chunkIndex: number } | SweepChunkJobData
+
+export interface SweepChunkJobData {
+  sweepId: number
+  /** The member runs, in the sweep's order. */
+  runIds: number[]
   chunkIndex: number
 }
 

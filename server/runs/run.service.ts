@@ -19,6 +19,7 @@ function toSummary(run: Run, olr: number | null = null, signOff?: SignOffInfo): 
   return {
     id: run.id,
     name: run.name,
+    sweepId: run.sweepId ?? null,
     status: run.status,
     profileName: run.inputs.profile.name,
     mixtureName: run.inputs.mixture?.name ?? null,
@@ -172,6 +173,8 @@ export async function cancelRun(sequelize: Sequelize, queue: RunQueue, actor: Ac
     await locked.save({ transaction: tx })
     const pending = await RunChunk.findAll({ where: { runId: id, status: ['pending', 'running', 'failed'] }, transaction: tx })
     await RunChunk.update({ status: 'cancelled' }, { where: { runId: id, status: ['pending', 'running', 'failed'] }, transaction: tx })
+    // A sweep member's jobs compute the other members too: they stay queued and skip this run.
+    if (locked.sweepId !== null) return []
     return pending.map((c) => c.jobId).filter((j): j is string => j !== null)
   })
   await queue.cancelJobs(jobIds)

@@ -2,6 +2,7 @@ import { z } from 'zod'
 import { MAX_DETAIL_WINDOW_WIDTH_CM, type ComputeSettings } from '../physics/engine/settings'
 import type { AtmosphereProfile } from '../physics/types'
 import type { MixtureGases } from './mixtures'
+import type { SweptGas } from './sweeps'
 
 export const RUN_STATUSES = ['queued', 'running', 'succeeded', 'failed', 'cancelled'] as const
 export type RunStatus = (typeof RUN_STATUSES)[number]
@@ -76,11 +77,18 @@ export interface RunInputs {
   catalogue: { id: string; checksum: string; generatorVersion: string; lineCount: number }
   settings: ComputeSettings
   engineVersion: string
+  /**
+   * For a member of a sweep: the sweep it was computed with (its numbers depend slightly on the
+   * other members, which share its grid), and its own amount, in `unit`.
+   */
+  sweep?: { gas: SweptGas; unit: string; amounts: number[]; amount: number }
 }
 
 export interface RunSummary {
   id: number
   name: string
+  /** The sweep the run is a member of, if any. */
+  sweepId: number | null
   status: RunStatus
   profileName: string
   mixtureName: string | null
