@@ -168,12 +168,19 @@ async function processSweepChunkJob(deps: ChunkProcessorDeps, data: SweepChunkJo
   if (taken.length === 0) return
   const { chunk } = taken[0]
   const where = `chunk ${data.chunkIndex} (${chunk.startCm}–${chunk.endCm} cm⁻¹) of sweep ${data.sweepId}`
+  let profiles
+  try {
+    profiles = sweepMemberProfiles(inputs)
+  } catch (err) {
+    // The frozen inputs themselves are refused: retrying would fail the same way.
+    return chunkFailed(sequelize, taken, `${where} cannot be computed: ${(err as Error).message}`, null)
+  }
   let outcome
   try {
     outcome = await pool.runSweep({
       kind: 'sweep',
       key: `sweep-${data.sweepId}-${inputs.sweep.amounts.join(',')}-${inputs.catalogue.checksum}`,
-      profiles: sweepMemberProfiles(inputs),
+      profiles,
       settings: inputs.settings,
       sweptGas: inputs.sweep.gas,
       catalogue: inputs.catalogue,

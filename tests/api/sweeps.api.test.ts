@@ -1,6 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import request from 'supertest'
 import { Run, Sweep } from '../../server/models/index'
+import { createLogger } from '../../server/logger'
+import { startChunkWorkers } from '../../server/runs/chunk-workers'
 import { CHUNK_QUEUE } from '../../server/runs/run-queue'
 import type { SweepDetail } from '../../shared/schemas/sweeps'
 import { signedInAgent } from '../support/http-agent'
@@ -95,13 +97,31 @@ describe('sweeps API', () => {
     const sweep = (await a.post('/api/sweeps', { profileId, settings, gas: 'CH4', amounts: [900, 1800, 3600] }).expect(202)).body.sweep as SweepDetail
     expect(sweep.unit).toBe('ppbv')
     await a.post(`/api/runs/${sweep.members[1].runId}/cancel`).expect(200)
-    const { startChunkWorkers } = await import('../../server/runs/chunk-workers')
-    const { createLogger } = await import('../../server/logger')
     await startChunkWorkers(system.queue, { sequelize: t.sequelize, pool: system.pool!, logger: createLogger('silent') })
     const done = await waitForSweep(a, sweep.id)
     expect(done.members.map((m) => m.status)).toEqual(['succeeded', 'cancelled', 'succeeded'])
     expect(done.status).toBe('cancelled')
     expect(done.members[2].forcingWPerM2!.tropopause).toBeGreaterThan(0)
+  })
+
+  it('when a chunk cannot be computed, every member fails with the reason', async () => {
+    const a = await signedInAgent(t, 'analyst')
+    const system = t.runSystem!
+    await system.queue.boss.offWork(CHUNK_QUEUE)
+    const settings = { ...QUICK_RUN_SETTINGS, startCm: 2000, endCm: 2010 }
+    const sweep = (await a.post('/api/sweeps', { profileId, settings, gas: 'CO2', amounts: [280, 560] }).expect(202)).body.sweep as SweepDetail
+    // Break the first member's frozen profile: the members' profiles are rebuilt from it.
+    const stored = await Run.findByPk(sweep.members[0].runId)
+    const inputs = structuredClone(stored!.inputs)
+    inputs.profile.snapshot.levels[3].temperatureK = -40
+    await Run.update({ inputs }, { where: { id: stored!.id } })
+    await startChunkWorkers(system.queue, { sequelize: t.sequelize, pool: system.pool!, logger: createLogger('silent') })
+    const done = await waitForSweep(a, sweep.id)
+    expect(done.status).toBe('failed')
+    for (const member of done.members) {
+      const run = (await a.get(`/api/runs/${member.runId}`)).body.run
+      expect(run.error).toMatch(/chunk \d+ .* of sweep \d+ cannot be computed: .*temperature/i)
+    }
   })
 
   it('validates the request, naming the field, and stores nothing', async () => {
