@@ -48,6 +48,7 @@ export const routes: RouteRecordRaw[] = [
       { path: 'runs', name: 'runs', component: () => import('@/views/RunsView.vue'), meta: { area: 'runs' } },
       { path: 'runs/new', name: 'run-new', component: () => import('@/views/NewRunView.vue'), meta: { area: 'runs' } },
       { path: 'runs/:id(\\d+)', name: 'run', component: () => import('@/views/RunView.vue'), props: true, meta: { area: 'runs' } },
+      { path: 'sweeps/:id(\\d+)', name: 'sweep', component: () => import('@/views/SweepView.vue'), props: true, meta: { area: 'runs' } },
       { path: 'mixtures', name: 'mixtures', component: () => import('@/views/MixturesView.vue'), meta: { area: 'mixtures' } },
       { path: 'catalogues', name: 'catalogues', component: () => import('@/views/CataloguesView.vue'), meta: { area: 'catalogues' } },
       { path: 'catalogues/:id(builtin|\\d+)', name: 'catalogue', component: () => import('@/views/CatalogueView.vue'), props: true, meta: { area: 'catalogues' } },
