@@ -6,6 +6,8 @@ import type { ComputeSettings } from '../../shared/physics/engine/settings'
 import type { AtmosphereProfile } from '../../shared/physics/types'
 import { buildPresetProfile } from '../../shared/presets/atmosphere-presets'
 import type { MixtureGases } from '../../shared/schemas/mixtures'
+import { SWEPT_GASES, type SweptGas } from '../../shared/schemas/sweeps'
+import { withSweptAmount } from '../../shared/mixtures/swept-amount'
 import { presetIdSchema, profileInputSchema } from '../../shared/schemas/profiles'
 import { CliError, optionalString, parseRange, requireNumber } from './args'
 
@@ -89,21 +91,17 @@ export function gasesFromOptions(v: Values): MixtureGases {
   return gases
 }
 
-/** Gases a forcing or a sweep may change, with the unit their amounts are given in. */
-export const CHANGEABLE_GASES = {
-  co2: { id: 'CO2', unit: 'ppmv', factor: 1e-6 },
-  ch4: { id: 'CH4', unit: 'ppbv', factor: 1e-9 },
-  n2o: { id: 'N2O', unit: 'ppbv', factor: 1e-9 },
-} as const
-
-export type ChangeableGas = (typeof CHANGEABLE_GASES)[keyof typeof CHANGEABLE_GASES]
+/** A gas a forcing or a sweep may change, with the unit its amounts are given in. */
+export interface ChangeableGas {
+  id: SweptGas
+  unit: string
+}
 
 /** The --gas option of forcing and sweep. */
 export function changeableGasOption(v: Values): ChangeableGas {
-  const key = String(v.gas ?? '').toLowerCase()
-  const gas = (CHANGEABLE_GASES as Record<string, ChangeableGas>)[key]
-  if (!gas) throw new CliError(`--gas must be co2, ch4 or n2o; got "${String(v.gas ?? '')}"`)
-  return gas
+  const id = String(v.gas ?? '').toUpperCase()
+  if (!Object.hasOwn(SWEPT_GASES, id)) throw new CliError(`--gas must be co2, ch4 or n2o; got "${String(v.gas ?? '')}"`)
+  return { id: id as SweptGas, unit: SWEPT_GASES[id as SweptGas].unit }
 }
 
 /** The profile with `gas` at a uniform amount (in the gas's unit) and the other command-line changes. */
@@ -113,7 +111,7 @@ export function profileWithAmount(
   gas: ChangeableGas,
   amount: number,
 ): AtmosphereProfile {
-  return withGases(base, { ...others, [gas.id]: { mode: 'uniform', vmr: amount * gas.factor } })
+  return withSweptAmount(withGases(base, others), gas.id, amount)
 }
 
 export function withGases(profile: AtmosphereProfile, gases: MixtureGases): AtmosphereProfile {

@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto'
 import type { Sequelize } from 'sequelize'
-import { applyMixture } from '../../shared/mixtures/apply-mixture'
+import { withSweptAmount } from '../../shared/mixtures/swept-amount'
 import { fitLogarithmicForcing } from '../../shared/physics/diagnostics/log-fit'
 import { sweepProfilesDifference } from '../../shared/physics/engine/compute-sweep'
 import { planChunks } from '../../shared/physics/engine/prepare'
@@ -12,18 +12,12 @@ import {
   type SweepDetail,
   type SweepForcing,
   type SweepMember,
-  type SweptGas,
 } from '../../shared/schemas/sweeps'
 import { AppError } from '../errors'
 import { Run, RunChunk, RunResult, Sweep, User } from '../models/index'
 import type { Actor } from '../services/access'
 import { runInputHash, snapshotRunInputs } from './run-inputs'
 import type { RunQueue } from './run-queue'
-
-/** The profile with `gas` at a uniform amount (in the gas's unit) at every level. */
-export function withSweptAmount(profile: AtmosphereProfile, gas: SweptGas, amount: number): AtmosphereProfile {
-  return applyMixture(profile, { [gas]: { mode: 'uniform', vmr: amount * SWEPT_GASES[gas].vmrPerUnit } }).profile
-}
 
 /**
  * The profiles of every member of a sweep, rebuilt from any member's frozen inputs: the same
@@ -50,7 +44,12 @@ export async function createSweep(
   const spec = SWEPT_GASES[input.gas]
   const referenceAmount = input.referenceAmount ?? input.amounts[0]
   const { inputs: base } = await snapshotRunInputs(input)
-  const sweepOf = (amount: number) => ({ gas: input.gas, unit: spec.unit, amounts: input.amounts, amount })
+  const sweepOf = (amount: number) => ({
+    gas: input.gas,
+    unit: spec.unit,
+    amounts: input.amounts,
+    amount,
+  })
   const memberInputs: RunInputs[] = input.amounts.map((amount, i) => {
     let snapshot: AtmosphereProfile
     try {
@@ -66,16 +65,30 @@ export async function createSweep(
     memberInputs.map((m) => m.profile.snapshot),
     input.gas,
   )
-  if (difference) throw new AppError(400, 'VALIDATION_FAILED', `These amounts do not make a sweep: ${difference}.`, { fields: [{ field: 'amounts', message: difference }] })
+  if (difference)
+    throw new AppError(
+      400,
+      'VALIDATION_FAILED',
+      `These amounts do not make a sweep: ${difference}.`,
+      { fields: [{ field: 'amounts', message: difference }] },
+    )
 
+  const gasLabel = spec.label
   const chunks = planChunks(base.settings)
   const jobIds = chunks.map(() => randomUUID())
   const name =
     input.name?.trim() ||
-    `${base.profile.name}${base.mixture ? ` · ${base.mixture.name}` : ''} · ${input.gas} sweep · ${base.settings.startCm}–${base.settings.endCm} cm⁻¹`
+    `${base.profile.name}${base.mixture ? ` · ${base.mixture.name}` : ''} · ${gasLabel} sweep · ${base.settings.startCm}–${base.settings.endCm} cm⁻¹`
   const { sweep, runIds } = await sequelize.transaction(async (tx) => {
     const created = await Sweep.create(
-      { name: name.slice(0, 160), gas: input.gas, unit: spec.unit, amounts: input.amounts, referenceAmount, ownerId: actor.id },
+      {
+        name: name.slice(0, 160),
+        gas: input.gas,
+        unit: spec.unit,
+        amounts: input.amounts,
+        referenceAmount,
+        ownerId: actor.id,
+      },
       { transaction: tx },
     )
     const ids: number[] = []
@@ -83,7 +96,7 @@ export async function createSweep(
       const amount = input.amounts[i]
       const run = await Run.create(
         {
-          name: `${name.slice(0, 120)} · ${input.gas} ${amount} ${spec.unit}`,
+          name: `${name.slice(0, 120)} · ${gasLabel} ${amount} ${spec.unit}`,
           status: 'queued',
           inputs,
           inputHash: runInputHash(inputs),
@@ -122,7 +135,10 @@ export async function createSweep(
     return { sweep: created, runIds: ids }
   })
   await queue.enqueueChunks(
-    chunks.map((c, k) => ({ jobId: jobIds[k], data: { sweepId: sweep.id, runIds, chunkIndex: c.index } })),
+    chunks.map((c, k) => ({
+      jobId: jobIds[k],
+      data: { sweepId: sweep.id, runIds, chunkIndex: c.index },
+    })),
   )
   return getSweep(sweep.id)
 }
@@ -135,7 +151,11 @@ function netFluxes(summary: Record<string, unknown>): SweepForcing {
     surfaceUpWPerM2: number
     surfaceDownWPerM2: number
   }
-  return { top: s.toaNetUpWPerM2, tropopause: s.tropopause.netUpWPerM2, surface: s.surfaceUpWPerM2 - s.surfaceDownWPerM2 }
+  return {
+    top: s.toaNetUpWPerM2,
+    tropopause: s.tropopause.netUpWPerM2,
+    surface: s.surfaceUpWPerM2 - s.surfaceDownWPerM2,
+  }
 }
 
 /** The sweep's status from its members': running until every member has ended. */
@@ -153,7 +173,9 @@ function sweepStatus(statuses: RunStatus[]): RunStatus {
  * logarithmic fit through the origin at each level.
  */
 export async function getSweep(id: number): Promise<SweepDetail> {
-  const sweep = await Sweep.findByPk(id, { include: [{ model: User, as: 'owner', attributes: ['displayName'] }] })
+  const sweep = await Sweep.findByPk(id, {
+    include: [{ model: User, as: 'owner', attributes: ['displayName'] }],
+  })
   if (!sweep) throw AppError.notFound('Sweep')
   const runs = await Run.findAll({
     where: { sweepId: id },
@@ -182,7 +204,11 @@ export async function getSweep(id: number): Promise<SweepDetail> {
       olrWPerM2: (summary?.olrWPerM2 as number | undefined) ?? null,
       forcingWPerM2:
         net && reference
-          ? { top: reference.top - net.top, tropopause: reference.tropopause - net.tropopause, surface: reference.surface - net.surface }
+          ? {
+              top: reference.top - net.top,
+              tropopause: reference.tropopause - net.tropopause,
+              surface: reference.surface - net.surface,
+            }
           : null,
     }
   })
@@ -206,7 +232,9 @@ export async function getSweep(id: number): Promise<SweepDetail> {
     createdAt: sweep.createdAt.toISOString(),
     status: sweepStatus(members.map((m) => m.status)),
     members,
-    logarithmicFit: fittable ? { top: fitAt('top'), tropopause: fitAt('tropopause'), surface: fitAt('surface') } : null,
+    logarithmicFit: fittable
+      ? { top: fitAt('top'), tropopause: fitAt('tropopause'), surface: fitAt('surface') }
+      : null,
   }
 }
 

@@ -2,11 +2,11 @@ import { z } from 'zod'
 import type { LogFitResult } from '../physics/diagnostics/log-fit'
 import { createRunSchema, type RunStatus } from './runs'
 
-/** Gases a sweep may vary, with the unit their amounts are given in and its mole fraction. */
+/** Gases a sweep may vary: how they are written, the unit of their amounts and its mole fraction. */
 export const SWEPT_GASES = {
-  CO2: { unit: 'ppmv', vmrPerUnit: 1e-6 },
-  CH4: { unit: 'ppbv', vmrPerUnit: 1e-9 },
-  N2O: { unit: 'ppbv', vmrPerUnit: 1e-9 },
+  CO2: { label: 'CO₂', unit: 'ppmv', vmrPerUnit: 1e-6 },
+  CH4: { label: 'CH₄', unit: 'ppbv', vmrPerUnit: 1e-9 },
+  N2O: { label: 'N₂O', unit: 'ppbv', vmrPerUnit: 1e-9 },
 } as const
 export type SweptGas = keyof typeof SWEPT_GASES
 
