@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto'
 import { literal, Op, QueryTypes, type Sequelize, type WhereOptions } from 'sequelize'
-import { planChunks } from '../../shared/physics/engine/prepare'
+import { planChunks, type ChunkBounds } from '../../shared/physics/engine/prepare'
 import type { Page } from '../../shared/schemas/paging'
 import { TERMINAL_RUN_STATUSES, type CreateRunInput, type RunDetail, type RunListQuery, type RunSummary } from '../../shared/schemas/runs'
 import { AppError } from '../errors'
@@ -44,6 +44,24 @@ function toSummary(run: Run, olr: number | null = null, signOff?: SignOffInfo): 
   }
 }
 
+/** The rows of a new run's chunks, pending, each with the id of the job that will compute it. */
+export function pendingChunkRows(runId: number, chunks: readonly ChunkBounds[], jobIds: readonly string[]) {
+  return chunks.map((c, i) => ({
+    runId,
+    chunkIndex: c.index,
+    startCm: c.startCm,
+    endCm: c.endCm,
+    status: 'pending' as const,
+    jobId: jobIds[i],
+    workerId: null,
+    result: null,
+    error: null,
+    computeMs: null,
+    startedAt: null,
+    finishedAt: null,
+  }))
+}
+
 /** Snapshots the inputs, stores the run and its chunks, and queues every chunk. */
 export async function createRun(sequelize: Sequelize, queue: RunQueue, actor: Actor, input: CreateRunInput): Promise<RunDetail> {
   const { inputs, warnings } = await snapshotRunInputs(input)
@@ -69,23 +87,7 @@ export async function createRun(sequelize: Sequelize, queue: RunQueue, actor: Ac
       },
       { transaction: tx },
     )
-    await RunChunk.bulkCreate(
-      chunks.map((c, i) => ({
-        runId: created.id,
-        chunkIndex: c.index,
-        startCm: c.startCm,
-        endCm: c.endCm,
-        status: 'pending' as const,
-        jobId: jobIds[i],
-        workerId: null,
-        result: null,
-        error: null,
-        computeMs: null,
-        startedAt: null,
-        finishedAt: null,
-      })),
-      { transaction: tx },
-    )
+    await RunChunk.bulkCreate(pendingChunkRows(created.id, chunks, jobIds), { transaction: tx })
     return created
   })
   // Queue after the rows are committed, so a fast worker always finds them.

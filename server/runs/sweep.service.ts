@@ -17,6 +17,7 @@ import { AppError } from '../errors'
 import { Run, RunChunk, RunResult, Sweep, User } from '../models/index'
 import type { Actor } from '../services/access'
 import { runInputHash, snapshotRunInputs } from './run-inputs'
+import { pendingChunkRows } from './run.service'
 import type { RunQueue } from './run-queue'
 
 /**
@@ -114,23 +115,7 @@ export async function createSweep(
       )
       ids.push(run.id)
       // Every member's chunk k carries the id of the one job that computes chunk k of all members.
-      await RunChunk.bulkCreate(
-        chunks.map((c, k) => ({
-          runId: run.id,
-          chunkIndex: c.index,
-          startCm: c.startCm,
-          endCm: c.endCm,
-          status: 'pending' as const,
-          jobId: jobIds[k],
-          workerId: null,
-          result: null,
-          error: null,
-          computeMs: null,
-          startedAt: null,
-          finishedAt: null,
-        })),
-        { transaction: tx },
-      )
+      await RunChunk.bulkCreate(pendingChunkRows(run.id, chunks, jobIds), { transaction: tx })
     }
     return { sweep: created, runIds: ids }
   })
