@@ -59,6 +59,15 @@ describe('a concentration sweep', () => {
     await rows.nth(1).locator('a').click()
     await page.waitForSelector('[data-test=run-page]')
     expect(await page.textContent('[data-test=run-sweep-link]')).toBe(`sweep #${sweepId}`)
+
+    // The runs list names each member's sweep, and the link leads there, not to the run.
+    await page.goto(`${base}/runs`)
+    const sweepLinks = page.locator('[data-test=run-sweep]')
+    await sweepLinks.first().waitFor()
+    expect(await sweepLinks.count()).toBe(3)
+    await sweepLinks.first().click()
+    await page.waitForSelector('[data-test=sweep-page]')
+    expect(page.url()).toBe(`${base}/sweeps/${sweepId}`)
     await page.close()
   }, 180_000)
 })
