@@ -103,7 +103,7 @@ async function storeChunk(
 /**
  * Records a chunk that could not be computed on each of its runs: a failure that may pass (a
  * crash, a lost connection) is retried by the queue (this throws) until the retries are used up;
- * a deterministic one (`retry` false) fails the runs at once.
+ * a deterministic one (`retry` null) fails the runs at once.
  */
 async function chunkFailed(
   sequelize: Sequelize,
