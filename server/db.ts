@@ -13,6 +13,14 @@ export function createSequelize(databaseUrl: string, logSql = false): Sequelize 
 }
 
 /** A plain pg pool for the session store (connect-pg-simple wants one). */
-export function createPgPool(databaseUrl: string, max = 5): pg.Pool {
-  return new pg.Pool({ connectionString: databaseUrl, max })
+export function createPgPool(
+  databaseUrl: string,
+  onIdleError: (err: Error) => void = () => {},
+  max = 5,
+): pg.Pool {
+  const pool = new pg.Pool({ connectionString: databaseUrl, max })
+  // An idle connection the server closes (a restart, a dropped database) is discarded by the
+  // pool; without a listener its 'error' event would end the process.
+  pool.on('error', onIdleError)
+  return pool
 }

@@ -20,7 +20,7 @@ async function main() {
   if (pending.length > 0) {
     throw new Error(`Database has ${pending.length} pending migration(s); run npm run migrate first.`)
   }
-  const sessionPool = createPgPool(config.databaseUrl)
+  const sessionPool = createPgPool(config.databaseUrl, (err) => logger.warn(`session database connection closed: ${err.message}`))
   const clientDistDir = fileURLToPath(new URL('../dist', import.meta.url))
   const runSystem = await startRunSystem(config, sequelize, logger)
   const app = createApp({ config, sequelize, sessionPool, logger, clientDistDir, getRunQueue: () => runSystem.queue })
