@@ -1,8 +1,8 @@
 import { randomUUID } from 'node:crypto'
-import { literal, Op, QueryTypes, type Sequelize, type WhereOptions } from 'sequelize'
+import { literal, Op, QueryTypes, type Sequelize, type Transaction, type WhereOptions } from 'sequelize'
 import { planChunks, type ChunkBounds } from '../../shared/physics/engine/prepare'
 import type { Page } from '../../shared/schemas/paging'
-import { TERMINAL_RUN_STATUSES, type CreateRunInput, type RunDetail, type RunListQuery, type RunSummary } from '../../shared/schemas/runs'
+import { TERMINAL_RUN_STATUSES, type CreateRunInput, type RunDetail, type RunInputs, type RunListQuery, type RunSummary } from '../../shared/schemas/runs'
 import { AppError } from '../errors'
 import { Run, RunChunk, RunResult, User } from '../models/index'
 import { assertCanModify, type Actor } from '../services/access'
@@ -44,52 +44,69 @@ function toSummary(run: Run, olr: number | null = null, signOff?: SignOffInfo): 
   }
 }
 
-/** The rows of a new run's chunks, pending, each with the id of the job that will compute it. */
-export function pendingChunkRows(runId: number, chunks: readonly ChunkBounds[], jobIds: readonly string[]) {
-  return chunks.map((c, i) => ({
-    runId,
-    chunkIndex: c.index,
-    startCm: c.startCm,
-    endCm: c.endCm,
-    status: 'pending' as const,
-    jobId: jobIds[i],
-    workerId: null,
-    result: null,
-    error: null,
-    computeMs: null,
-    startedAt: null,
-    finishedAt: null,
-  }))
+/** The name a run gets when none is given: profile · mixture · what (when given) · range. */
+export function defaultRunName(inputs: RunInputs, what?: string): string {
+  const mixture = inputs.mixture ? ` · ${inputs.mixture.name}` : ''
+  return `${inputs.profile.name}${mixture}${what ? ` · ${what}` : ''} · ${inputs.settings.startCm}–${inputs.settings.endCm} cm⁻¹`
+}
+
+/**
+ * Stores a queued run and its pending chunks, each chunk with the id of the job that will compute
+ * it (so every job can be queued in one insert once the transaction is committed).
+ */
+export async function insertQueuedRun(
+  tx: Transaction,
+  run: { name: string; inputs: RunInputs; ownerId: number; sweepId?: number; sweepAmount?: number },
+  chunks: readonly ChunkBounds[],
+  jobIds: readonly string[],
+): Promise<Run> {
+  const created = await Run.create(
+    {
+      name: run.name.slice(0, 160),
+      status: 'queued',
+      inputs: run.inputs,
+      inputHash: runInputHash(run.inputs),
+      engineVersion: run.inputs.engineVersion,
+      chunkCount: chunks.length,
+      error: null,
+      queuedAt: new Date(),
+      startedAt: null,
+      finishedAt: null,
+      ownerId: run.ownerId,
+      sweepId: run.sweepId ?? null,
+      sweepAmount: run.sweepAmount ?? null,
+    },
+    { transaction: tx },
+  )
+  await RunChunk.bulkCreate(
+    chunks.map((c, i) => ({
+      runId: created.id,
+      chunkIndex: c.index,
+      startCm: c.startCm,
+      endCm: c.endCm,
+      status: 'pending' as const,
+      jobId: jobIds[i],
+      workerId: null,
+      result: null,
+      error: null,
+      computeMs: null,
+      startedAt: null,
+      finishedAt: null,
+    })),
+    { transaction: tx },
+  )
+  return created
 }
 
 /** Snapshots the inputs, stores the run and its chunks, and queues every chunk. */
 export async function createRun(sequelize: Sequelize, queue: RunQueue, actor: Actor, input: CreateRunInput): Promise<RunDetail> {
   const { inputs, warnings } = await snapshotRunInputs(input)
   const chunks = planChunks(inputs.settings)
-  const name = input.name?.trim() || `${inputs.profile.name}${inputs.mixture ? ` · ${inputs.mixture.name}` : ''} · ${inputs.settings.startCm}–${inputs.settings.endCm} cm⁻¹`
+  const name = input.name?.trim() || defaultRunName(inputs)
   // Job ids are chosen here so the chunk rows carry them from the start and every job is queued
   // in one insert.
   const jobIds = chunks.map(() => randomUUID())
-  const run = await sequelize.transaction(async (tx) => {
-    const created = await Run.create(
-      {
-        name: name.slice(0, 160),
-        status: 'queued',
-        inputs,
-        inputHash: runInputHash(inputs),
-        engineVersion: inputs.engineVersion,
-        chunkCount: chunks.length,
-        error: null,
-        queuedAt: new Date(),
-        startedAt: null,
-        finishedAt: null,
-        ownerId: actor.id,
-      },
-      { transaction: tx },
-    )
-    await RunChunk.bulkCreate(pendingChunkRows(created.id, chunks, jobIds), { transaction: tx })
-    return created
-  })
+  const run = await sequelize.transaction((tx) => insertQueuedRun(tx, { name, inputs, ownerId: actor.id }, chunks, jobIds))
   // Queue after the rows are committed, so a fast worker always finds them.
   await queue.enqueueChunks(chunks.map((c, i) => ({ jobId: jobIds[i], data: { runId: run.id, chunkIndex: c.index } })))
   return { ...(await getRun(run.id)), mixtureWarnings: warnings }

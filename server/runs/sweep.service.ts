@@ -2,7 +2,6 @@ import { randomUUID } from 'node:crypto'
 import type { Sequelize } from 'sequelize'
 import { withSweptAmount } from '../../shared/mixtures/swept-amount'
 import { fitLogarithmicForcing } from '../../shared/physics/diagnostics/log-fit'
-import { sweepProfilesDifference } from '../../shared/physics/engine/compute-sweep'
 import { planChunks } from '../../shared/physics/engine/prepare'
 import type { AtmosphereProfile } from '../../shared/physics/types'
 import { TERMINAL_RUN_STATUSES, type RunInputs, type RunStatus } from '../../shared/schemas/runs'
@@ -14,10 +13,10 @@ import {
   type SweepMember,
 } from '../../shared/schemas/sweeps'
 import { AppError } from '../errors'
-import { Run, RunChunk, RunResult, Sweep, User } from '../models/index'
+import { Run, RunResult, Sweep, User } from '../models/index'
 import type { Actor } from '../services/access'
-import { runInputHash, snapshotRunInputs } from './run-inputs'
-import { pendingChunkRows } from './run.service'
+import { snapshotRunInputs } from './run-inputs'
+import { defaultRunName, insertQueuedRun } from './run.service'
 import type { RunQueue } from './run-queue'
 
 /**
@@ -62,24 +61,9 @@ export async function createSweep(
     }
     return { ...base, profile: { ...base.profile, snapshot }, sweep: sweepOf(amount) }
   })
-  const difference = sweepProfilesDifference(
-    memberInputs.map((m) => m.profile.snapshot),
-    input.gas,
-  )
-  if (difference)
-    throw new AppError(
-      400,
-      'VALIDATION_FAILED',
-      `These amounts do not make a sweep: ${difference}.`,
-      { fields: [{ field: 'amounts', message: difference }] },
-    )
-
-  const gasLabel = spec.label
   const chunks = planChunks(base.settings)
   const jobIds = chunks.map(() => randomUUID())
-  const name =
-    input.name?.trim() ||
-    `${base.profile.name}${base.mixture ? ` · ${base.mixture.name}` : ''} · ${gasLabel} sweep · ${base.settings.startCm}–${base.settings.endCm} cm⁻¹`
+  const name = input.name?.trim() || defaultRunName(base, `${spec.label} sweep`)
   const { sweep, runIds } = await sequelize.transaction(async (tx) => {
     const created = await Sweep.create(
       {
@@ -95,27 +79,20 @@ export async function createSweep(
     const ids: number[] = []
     for (const [i, inputs] of memberInputs.entries()) {
       const amount = input.amounts[i]
-      const run = await Run.create(
+      // Every member's chunk k carries the id of the one job that computes chunk k of all members.
+      const member = await insertQueuedRun(
+        tx,
         {
-          name: `${name.slice(0, 120)} · ${gasLabel} ${amount} ${spec.unit}`,
-          status: 'queued',
+          name: `${name.slice(0, 120)} · ${spec.label} ${amount} ${spec.unit}`,
           inputs,
-          inputHash: runInputHash(inputs),
-          engineVersion: inputs.engineVersion,
-          chunkCount: chunks.length,
-          error: null,
-          queuedAt: new Date(),
-          startedAt: null,
-          finishedAt: null,
           ownerId: actor.id,
           sweepId: created.id,
           sweepAmount: amount,
         },
-        { transaction: tx },
+        chunks,
+        jobIds,
       )
-      ids.push(run.id)
-      // Every member's chunk k carries the id of the one job that computes chunk k of all members.
-      await RunChunk.bulkCreate(pendingChunkRows(run.id, chunks, jobIds), { transaction: tx })
+      ids.push(member.id)
     }
     return { sweep: created, runIds: ids }
   })

@@ -39,18 +39,6 @@ export interface PreparedSweep {
 }
 
 /**
- * Where a member's profile differs from the first member's other than in the swept gas, as
- * "member m differs … in field", or null when the profiles form a sweep of `gas`.
- */
-export function sweepProfilesDifference(profiles: readonly AtmosphereProfile[], gas: GasId): string | null {
-  for (let m = 1; m < profiles.length; m++) {
-    const difference = profileDifference(profiles[0], profiles[m], gas)
-    if (difference) return `member ${m} differs from member 0 in ${difference}, not only in ${gas}`
-  }
-  return null
-}
-
-/**
  * Where two profiles differ other than in the swept gas, or null.
  * Method: exact comparison of the surface and of every level's pressure, temperature, height and
  * mixing ratios. Source: — (bookkeeping).
