@@ -19,4 +19,16 @@ setUnauthenticatedHandler(() => {
   if (!current.meta.public) void router.push({ name: ROUTE.signIn, query: { redirect: current.fullPath } })
 })
 
+// After a new version is deployed, an open tab may ask for page chunks that are gone. Load the
+// page afresh once (common practice for code-split apps); a second failure in a row is not retried.
+const RELOADED_FOR = 'tauline.reloadedForChunk'
+router.onError((error: unknown, to) => {
+  const message = error instanceof Error ? error.message : String(error)
+  if (!/dynamically imported module|Importing a module script failed|Failed to fetch/i.test(message)) return
+  if (sessionStorage.getItem(RELOADED_FOR) === to.fullPath) return
+  sessionStorage.setItem(RELOADED_FOR, to.fullPath)
+  window.location.assign(to.fullPath)
+})
+router.afterEach(() => sessionStorage.removeItem(RELOADED_FOR))
+
 app.mount('#app')

@@ -1,7 +1,7 @@
 import type { Page } from 'playwright-core'
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest'
 import { AREA_ROLES, ROLES, type Role } from '../../shared/schemas/auth'
-import { startE2eApp, type E2eApp } from '../support/e2e-app'
+import { type E2eApp, openReportedPage, startE2eApp } from '../support/e2e-app'
 import type { TestApp } from '../support/test-app'
 
 let t: TestApp
@@ -21,9 +21,9 @@ afterAll(async () => {
   await app?.close()
 })
 
-beforeEach(async () => {
+beforeEach(async ({ onTestFailed }) => {
   await browser.context.clearCookies()
-  page = await browser.context.newPage()
+  page = await openReportedPage(browser, onTestFailed)
 })
 
 async function signIn(email: string, password: string) {

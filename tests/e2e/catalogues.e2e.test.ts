@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs'
 import type { Page } from 'playwright-core'
-import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { signInThroughPage, startE2eApp, type E2eApp } from '../support/e2e-app'
+import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest'
+import { type E2eApp, openReportedPage, signInThroughPage, startE2eApp } from '../support/e2e-app'
 import type { TestApp } from '../support/test-app'
 
 // Six invented CO2 lines near 667 cm⁻¹ (tests/fixtures/line-lists/README.md).
@@ -19,7 +19,10 @@ beforeAll(async () => {
   t = app.t
   base = app.base
   browser = app.browser
-  page = await browser.context.newPage()
+})
+
+beforeEach(async ({ onTestFailed }) => {
+  page = await openReportedPage(browser, onTestFailed)
 })
 
 afterAll(async () => {

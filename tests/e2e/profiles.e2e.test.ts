@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs'
 import type { Page } from 'playwright-core'
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest'
-import { signInThroughPage, startE2eApp, type E2eApp } from '../support/e2e-app'
+import { type E2eApp, openReportedPage, signInThroughPage, startE2eApp } from '../support/e2e-app'
 import type { TestApp } from '../support/test-app'
 
 const FIXTURE = 'tests/fixtures/soundings/comma-degc-hpa-dewpoint.csv'
@@ -23,9 +23,9 @@ afterAll(async () => {
   await app?.close()
 })
 
-beforeEach(async () => {
+beforeEach(async ({ onTestFailed }) => {
   await browser.context.clearCookies()
-  page = await browser.context.newPage()
+  page = await openReportedPage(browser, onTestFailed)
 })
 
 async function signInAsAnalyst() {

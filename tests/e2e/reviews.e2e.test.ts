@@ -3,7 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Role } from '../../shared/schemas/auth'
 import { signedInAgent } from '../support/http-agent'
 import { createPresetProfile, QUICK_RUN_SETTINGS, waitForRun } from '../support/runs'
-import { signInThroughPage, startE2eApp, type E2eApp } from '../support/e2e-app'
+import { type E2eApp, openReportedPage, type OnTestFailed, signInThroughPage, startE2eApp } from '../support/e2e-app'
 import type { TestApp } from '../support/test-app'
 
 let t: TestApp
@@ -30,17 +30,17 @@ afterAll(async () => {
   await app?.close()
 })
 
-async function signIn(role: Role): Promise<Page> {
+async function signIn(role: Role, onTestFailed: OnTestFailed): Promise<Page> {
   // One browser profile for both tests: start each signed out.
   await browser.context.clearCookies()
-  const page = await browser.context.newPage()
+  const page = await openReportedPage(browser, onTestFailed)
   await signInThroughPage(page, base, t.account(role))
   return page
 }
 
 describe('reviews in the browser', () => {
-  it('when a reviewer signs a run off from the queue, it leaves the queue and its page shows a matching signature', async () => {
-    const page = await signIn('reviewer')
+  it('when a reviewer signs a run off from the queue, it leaves the queue and its page shows a matching signature', async ({ onTestFailed }) => {
+    const page = await signIn('reviewer', onTestFailed)
     await page.click('[data-area=reviews]')
     const row = `[data-test=reviews-page] [data-run-id="${runId}"]`
     await page.waitForSelector(row)
@@ -76,8 +76,8 @@ describe('reviews in the browser', () => {
     await page.close()
   })
 
-  it('when an analyst opens the reviews page, sees "not for your role" and no Reviews link', async () => {
-    const page = await signIn('analyst')
+  it('when an analyst opens the reviews page, sees "not for your role" and no Reviews link', async ({ onTestFailed }) => {
+    const page = await signIn('analyst', onTestFailed)
     expect(await page.$('[data-area=reviews]')).toBeNull()
     await page.goto(`${base}/reviews`)
     await page.waitForSelector('[data-test=forbidden]')

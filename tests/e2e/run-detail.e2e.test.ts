@@ -1,6 +1,6 @@
 import { readFileSync } from 'node:fs'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { signInThroughPage, startE2eApp, type E2eApp } from '../support/e2e-app'
+import { type E2eApp, openReportedPage, signInThroughPage, startE2eApp } from '../support/e2e-app'
 import type { TestApp } from '../support/test-app'
 
 // The full-resolution window from the analyst's side: asked for in the new-run form, shown and
@@ -24,8 +24,8 @@ afterAll(async () => {
 const DETAIL = '[data-test=run-detail-spectrum]'
 
 describe('the full-resolution window of a run', () => {
-  it('when the window leaves the range the form says so and sends nothing; a valid one is charted and downloadable', async () => {
-    const page = await browser.context.newPage()
+  it('when the window leaves the range the form says so and sends nothing; a valid one is charted and downloadable', async ({ onTestFailed }) => {
+    const page = await openReportedPage(browser, onTestFailed)
     await signInThroughPage(page, base, t.account('analyst'))
 
     await page.goto(`${base}/runs/new`)

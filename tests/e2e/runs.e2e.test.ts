@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { signInThroughPage, startE2eApp, type E2eApp } from '../support/e2e-app'
+import { type E2eApp, openReportedPage, signInThroughPage, startE2eApp } from '../support/e2e-app'
 import type { TestApp } from '../support/test-app'
 
 let t: TestApp
@@ -19,8 +19,8 @@ afterAll(async () => {
 })
 
 describe('a run from the demo data', () => {
-  it('is submitted from the form, its progress bar reaches 100 %, and its results appear', async () => {
-    const page = await browser.context.newPage()
+  it('is submitted from the form, its progress bar reaches 100 %, and its results appear', async ({ onTestFailed }) => {
+    const page = await openReportedPage(browser, onTestFailed)
     await signInThroughPage(page, base, t.account('analyst'))
 
     await page.goto(`${base}/runs/new`)
@@ -54,9 +54,9 @@ describe('a run from the demo data', () => {
     await page.close()
   })
 
-  it('when its owner deletes a finished run from its page, the run is gone from the list', async () => {
+  it('when its owner deletes a finished run from its page, the run is gone from the list', async ({ onTestFailed }) => {
     // The browser context is still signed in as the analyst who made the run above.
-    const page = await browser.context.newPage()
+    const page = await openReportedPage(browser, onTestFailed)
     await page.goto(`${base}/runs`)
     await page.waitForSelector('[data-test=runs-page] [data-run-id]')
     const runId = await page.getAttribute('[data-test=runs-page] [data-run-id]', 'data-run-id')

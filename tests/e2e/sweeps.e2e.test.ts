@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { signInThroughPage, startE2eApp, type E2eApp } from '../support/e2e-app'
+import { type E2eApp, openReportedPage, signInThroughPage, startE2eApp } from '../support/e2e-app'
 
 // A concentration sweep from the analyst's side: asked for in the new-run form, followed and read
 // on its own page, each member a run of its own. Function only; speed is measured by the bench.
@@ -14,9 +14,9 @@ afterAll(async () => {
 })
 
 describe('a concentration sweep', () => {
-  it('refuses a bad amount in the form, then runs every amount and shows forcing, fit, chart and downloads', async () => {
+  it('refuses a bad amount in the form, then runs every amount and shows forcing, fit, chart and downloads', async ({ onTestFailed }) => {
     const { base, browser, t } = app
-    const page = await browser.context.newPage()
+    const page = await openReportedPage(browser, onTestFailed)
     await signInThroughPage(page, base, t.account('analyst'))
     await page.goto(`${base}/runs/new`)
     await page.waitForSelector('[data-test=new-run-page]')
