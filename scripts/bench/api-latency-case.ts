@@ -7,11 +7,9 @@
 // latency percentiles come from every response's own time, since autocannon reports no p95.
 import { fork, type ChildProcess } from 'node:child_process'
 import { randomBytes } from 'node:crypto'
-import { existsSync, readdirSync, readFileSync } from 'node:fs'
 import { Agent, get as httpGet, type Server, type ServerResponse } from 'node:http'
 import type { AddressInfo } from 'node:net'
 import { loadavg } from 'node:os'
-import { join } from 'node:path'
 import { fileURLToPath } from 'node:url'
 import autocannon from 'autocannon'
 import type { Sequelize } from 'sequelize'
@@ -31,6 +29,7 @@ import { serialiseResult } from '../../server/runs/finalize-run'
 import { runInputHash } from '../../server/runs/run-inputs'
 import { createBenchDatabase } from './bench-database'
 import type { BenchRow, CaseOptions } from './cases'
+import { postgresCpuS } from './process-cpu'
 
 const SERVE_FLAG = '--serve-api-for-bench'
 const BENCH_PASSWORD = 'bench-password-2026'
@@ -487,34 +486,6 @@ async function paced(
     responses: latencies.length,
     ...totals,
   }
-}
-
-/**
- * CPU seconds used so far by the PostgreSQL server of `clusterDir`: the postmaster, its live
- * backends, and (through the postmaster's children counters) every backend that has ended.
- */
-function postgresCpuS(clusterDir: string | undefined): number | undefined {
-  const pidFile = clusterDir && join(clusterDir, 'data/postmaster.pid')
-  if (!pidFile || !existsSync(pidFile)) return undefined
-  const postmaster = Number(readFileSync(pidFile, 'utf8').split('\n')[0])
-  const ticksPerS = 100 // USER_HZ on Linux
-  let ticks = 0
-  for (const entry of readdirSync('/proc')) {
-    if (!/^\d+$/.test(entry)) continue
-    try {
-      // After "pid (command) ": state ppid … utime stime cutime cstime (fields 14–17 of proc(5)).
-      const stat = readFileSync(`/proc/${entry}/stat`, 'utf8')
-      const f = stat
-        .slice(stat.lastIndexOf(')') + 2)
-        .split(' ')
-        .map(Number)
-      if (Number(entry) === postmaster) ticks += f[11] + f[12] + f[13] + f[14]
-      else if (f[1] === postmaster) ticks += f[11] + f[12]
-    } catch {
-      // The process ended while being read.
-    }
-  }
-  return ticks / ticksPerS
 }
 
 function percentile(sorted: Float64Array, p: number): number {

@@ -4,7 +4,7 @@
 // giving the scale-out speed-up. Workers are started and warmed on a small run first (catalogue
 // loaded, code compiled), as long-running workers would be.
 import { spawn, type ChildProcess } from 'node:child_process'
-import { loadavg } from 'node:os'
+import { availableParallelism, loadavg } from 'node:os'
 import { dirname, join } from 'node:path'
 import { fileURLToPath } from 'node:url'
 import type { RunSettingsInput } from '../../shared/schemas/runs'
@@ -17,11 +17,16 @@ import { createRunQueue } from '../../server/runs/run-queue'
 import { createRun } from '../../server/runs/run.service'
 import { createBenchDatabase } from './bench-database'
 import type { BenchRow, CaseOptions } from './cases'
+import { postgresCpuS, processCpuS } from './process-cpu'
 
 const ROOT = join(dirname(fileURLToPath(import.meta.url)), '..', '..')
 
 function startWorker(databaseUrl: string): ChildProcess {
-  return spawn(process.execPath, ['--import', 'tsx', join(ROOT, 'server/worker.ts')], {
+  // TAULINE_BENCH_CPU_PROF=<dir> writes a CPU profile of every worker process (main thread and
+  // chunk threads) there, to see where the time outside the chunk computes goes.
+  const profileDir = process.env.TAULINE_BENCH_CPU_PROF
+  const profile = profileDir ? ['--cpu-prof', `--cpu-prof-dir=${profileDir}`] : []
+  return spawn(process.execPath, [...profile, '--import', 'tsx', join(ROOT, 'server/worker.ts')], {
     cwd: ROOT,
     env: {
       ...process.env,
@@ -88,10 +93,19 @@ export async function caseG(options: CaseOptions): Promise<BenchRow[]> {
           await waitForRun(warm.id)
           options.log(`  G: case A through the queue on ${processes} worker process(es) …`)
           const load = loadavg()[0]
+          // Where the machine's time goes: worker processes (compute threads and their main
+          // threads), PostgreSQL, and this process (submission and polling).
+          const cpuNow = () => ({
+            workersS: workers.reduce((sum, w) => sum + (processCpuS(w.pid!) ?? 0), 0),
+            postgresS: postgresCpuS(db.clusterDir) ?? 0,
+            benchS: (process.cpuUsage().user + process.cpuUsage().system) / 1e6,
+          })
+          const cpuBefore = cpuNow()
           const t0 = performance.now()
           const run = await submit(range)
           await waitForRun(run.id)
           const wallS = (performance.now() - t0) / 1000
+          const cpuAfter = cpuNow()
           walls.push(wallS)
           const chunks = await RunChunk.findAll({ where: { runId: run.id } })
           const computeS = chunks.reduce((s, c) => s + (c.computeMs ?? 0), 0) / 1000
@@ -121,6 +135,10 @@ export async function caseG(options: CaseOptions): Promise<BenchRow[]> {
             notes: {
               chunkComputeS: Number(computeS.toFixed(2)),
               mergeAndStoreS: Number(finishedToStored.toFixed(2)),
+              workerCpuS: Number((cpuAfter.workersS - cpuBefore.workersS).toFixed(2)),
+              postgresCpuS: Number((cpuAfter.postgresS - cpuBefore.postgresS).toFixed(2)),
+              benchProcessCpuS: Number((cpuAfter.benchS - cpuBefore.benchS).toFixed(2)),
+              coreSecondsOfWall: Number((wallS * availableParallelism()).toFixed(2)),
               loadAverageAtStart: Number(load.toFixed(2)),
               ...(processes > 1 ? { speedupOverOneProcess: Number((walls[0] / wallS).toFixed(2)) } : {}),
             },

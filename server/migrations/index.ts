@@ -8,6 +8,7 @@ import * as m0007 from './0007-add-run-result-detail'
 import * as m0008 from './0008-create-reviews'
 import * as m0009 from './0009-store-results-as-json'
 import * as m0010 from './0010-create-sweeps'
+import * as m0011 from './0011-compress-results-with-lz4'
 
 /** Every migration in order. Add new ones at the end; never edit one that has shipped. */
 export const migrations = [
@@ -21,4 +22,5 @@ export const migrations = [
   { name: '0008-create-reviews', ...m0008 },
   { name: '0009-store-results-as-json', ...m0009 },
   { name: '0010-create-sweeps', ...m0010 },
+  { name: '0011-compress-results-with-lz4', ...m0011 },
 ]

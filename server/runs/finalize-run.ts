@@ -76,7 +76,8 @@ export async function finalizeRun(run: Run, inputs: Run['inputs'], tx: Transacti
   const prepared = prepareComputation(inputs.profile.snapshot, toLineTable([]), inputs.settings)
   const merged = mergeChunkResults(prepared, chunks.map((c) => decodeChunkResult(c.result as StoredChunkResult)))
   const { summary, data, detail } = serialiseResult(merged)
-  await RunResult.create({ runId: run.id, summary, data, detail }, { transaction: tx })
+  // No RETURNING: the database would send the megabytes of results straight back.
+  await RunResult.create({ runId: run.id, summary, data, detail }, { transaction: tx, returning: false })
   // Chunk payloads are no longer needed once merged; keep the rows for timing and provenance.
   await RunChunk.update({ result: null }, { where: { runId: run.id }, transaction: tx })
   run.status = 'succeeded'

@@ -41,6 +41,36 @@ describe('runs API', () => {
     expect(csv.text).toMatch(/wavenumber_cm-1,olr_W_m-2_\(cm-1\)-1/)
   })
 
+  it('stores results and chunk payloads compressed with lz4 when the database offers it, and reads them back', async () => {
+    const [offered] = await t.sequelize.query(
+      "SELECT 1 FROM pg_settings WHERE name = 'default_toast_compression' AND 'lz4' = ANY(enumvals)",
+    )
+    const [columns] = (await t.sequelize.query(
+      `SELECT attrelid::regclass::text AS tbl, attname AS col, attcompression AS method FROM pg_attribute
+        WHERE (attrelid = 'run_results'::regclass AND attname IN ('data', 'detail'))
+           OR (attrelid = 'run_chunks'::regclass AND attname = 'result') ORDER BY 1, 2`,
+    )) as [{ tbl: string; col: string; method: string }[], unknown]
+    // attcompression: 'l' lz4, '' the server's default (pglz); see the PostgreSQL catalogue docs.
+    const expected = offered.length > 0 ? 'l' : ''
+    expect(columns).toEqual([
+      { tbl: 'run_chunks', col: 'result', method: expected },
+      { tbl: 'run_results', col: 'data', method: expected },
+      { tbl: 'run_results', col: 'detail', method: expected },
+    ])
+
+    // A run large enough for its results to be compressed (over PostgreSQL's 2 kB threshold).
+    const a = await signedInAgent(t, 'analyst')
+    const created = await a.post('/api/runs', { profileId, settings: { ...QUICK_RUN_SETTINGS, outputResolutionCm: 0.1 } }).expect(202)
+    const run = await waitForRun(a, created.body.run.id)
+    expect(run.status).toBe('succeeded')
+    const [stored] = (await t.sequelize.query(
+      `SELECT pg_column_compression(data) AS method FROM run_results WHERE run_id = ${Number(run.id)}`,
+    )) as [{ method: string | null }[], unknown]
+    expect(stored[0].method).toBe(offered.length > 0 ? 'lz4' : 'pglz')
+    const results = (await a.get(`/api/runs/${run.id}/results`).expect(200)).body
+    expect(results.spectrum.wavenumberCm.length).toBeGreaterThan(20)
+  })
+
   it('when the same inputs run twice, the hash and every number are the same', async () => {
     const a = await signedInAgent(t, 'analyst')
     const first = (await a.post('/api/runs', { profileId, settings: QUICK_RUN_SETTINGS }).expect(202)).body.run
