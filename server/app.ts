@@ -20,6 +20,7 @@ import { profilesRoutes } from './routes/profiles.routes'
 import { reviewsRoutes, runReviewsRoutes } from './routes/reviews.routes'
 import { runsRoutes } from './routes/runs.routes'
 import { sweepsRoutes } from './routes/sweeps.routes'
+import { comparisonsRoutes } from './routes/comparisons.routes'
 import type { RunQueue } from './runs/run-queue'
 import { usersRoutes } from './routes/users.routes'
 
@@ -98,6 +99,7 @@ export function createApp({ config, sequelize, sessionPool, logger, clientDistDi
   api.use('/runs/:id/reviews', runReviewsRoutes(sequelize))
   api.use('/runs', runsRoutes(sequelize, getRunQueue ?? (() => undefined)))
   api.use('/sweeps', sweepsRoutes(sequelize, getRunQueue ?? (() => undefined)))
+  api.use('/comparisons', comparisonsRoutes())
   api.use('/reviews', reviewsRoutes(sequelize))
   api.use(apiNotFound)
   app.use('/api', api)

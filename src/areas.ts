@@ -80,11 +80,8 @@ export const AREAS: AreaInfo[] = [
   {
     area: 'comparisons',
     title: 'Comparisons',
-    summary: 'Scenarios side by side, forcing and concentration sweeps.',
-    upcoming: [
-      'Difference spectra and forcing at the top of the atmosphere, the tropopause and the surface.',
-      'Concentration sweeps with a logarithmic fit, and where in the spectrum the forcing comes from.',
-    ],
+    summary: 'Two runs side by side: forcing, difference spectra and heating-rate changes.',
+    upcoming: [],
     icon: 'comparisons',
   },
   {

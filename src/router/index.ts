@@ -24,7 +24,7 @@ export const ROUTE = {
 
 const AreaView = () => import('@/views/AreaView.vue')
 
-const workAreas: Area[] = ['comparisons', 'observations']
+const workAreas: Area[] = ['observations']
 
 export const routes: RouteRecordRaw[] = [
   { path: '/sign-in', name: ROUTE.signIn, component: SignInView, meta: { public: true } },
@@ -44,6 +44,7 @@ export const routes: RouteRecordRaw[] = [
         props: { area },
         meta: { area },
       })),
+      { path: 'comparisons', name: 'comparisons', component: () => import('@/views/ComparisonsView.vue'), meta: { area: 'comparisons' } },
       { path: 'reviews', name: 'reviews', component: () => import('@/views/ReviewsView.vue'), meta: { area: 'reviews' } },
       { path: 'runs', name: 'runs', component: () => import('@/views/RunsView.vue'), meta: { area: 'runs' } },
       { path: 'runs/new', name: 'run-new', component: () => import('@/views/NewRunView.vue'), meta: { area: 'runs' } },
