@@ -29,12 +29,15 @@ afterAll(async () => {
 })
 
 describe('comparing two runs in the browser', () => {
-  it('picks two runs, shows forcing, input differences, charts and downloads, swaps them, and explains a refusal', async ({ onTestFailed }) => {
+  it('starts from a run, picks the other, shows forcing, input differences, charts and downloads, swaps them, and explains a refusal', async ({ onTestFailed }) => {
     const { base, browser, t } = app
     const page = await openReportedPage(browser, onTestFailed)
     await signInThroughPage(page, base, t.account('reviewer'))
-    await page.click('[data-area=comparisons]')
+    // From the reference run's own page.
+    await page.goto(`${base}/runs/${ids.reference}`)
+    await page.click('[data-test=compare-run]')
     await page.waitForSelector('[data-test=comparisons-page]')
+    expect(page.url()).toContain(`before=${ids.reference}`)
 
     const pick = async (select: string, runName: string) => {
       await page.click(`[data-test=${select}]`)
@@ -45,7 +48,7 @@ describe('comparing two runs in the browser', () => {
         [...document.querySelectorAll<HTMLElement>('.n-base-select-menu')].every((menu) => menu.offsetParent === null),
       )
     }
-    await pick('compare-before', 'Scenario K reference')
+    await page.waitForSelector('[data-test=compare-before] >> text=Scenario K reference')
     await pick('compare-after', 'Scenario K doubled')
     await page.waitForSelector('[data-test=compare-forcing] [data-test=forcing-top]')
     expect(page.url()).toContain(`before=${ids.reference}`)
