@@ -59,3 +59,14 @@ export function shortNumber(value: number, digits = 4): string {
     return value.toExponential(digits - 1)
   return String(Number(value.toPrecision(digits)))
 }
+
+/**
+ * Per-layer values as profile points, each drawn at the geometric-mean pressure of the layer's
+ * bounding levels (layer i lies between levels i and i + 1); null values become gaps.
+ */
+export function layerPoints(levelPressurePa: readonly (number | null)[], values: readonly (number | null)[]): ProfilePoint[] {
+  return values.map((v, i) => ({
+    pressurePa: Math.sqrt((levelPressurePa[i] ?? NaN) * (levelPressurePa[i + 1] ?? NaN)),
+    value: v ?? NaN,
+  }))
+}

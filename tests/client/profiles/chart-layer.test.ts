@@ -5,12 +5,20 @@ import ChartFrame from '@/components/charts/ChartFrame.vue'
 import ChartLogPressureProfile from '@/components/charts/ChartLogPressureProfile.vue'
 import { chartCsvText, csvFileName } from '@/components/charts/chart-csv'
 import type { ChartOption } from '@/components/charts/echarts-setup'
-import { logPressureRangeHpa, pressureTickLabel } from '@/components/charts/log-pressure-axis'
+import { layerPoints, logPressureRangeHpa, pressureTickLabel } from '@/components/charts/log-pressure-axis'
 
 beforeEach(() => setActivePinia(createPinia()))
 afterEach(() => vi.restoreAllMocks())
 
 describe('chart helpers', () => {
+  it('draws a layer value at the geometric-mean pressure of its two levels, with gaps for missing values', () => {
+    // √(1000 × 100) = 316.2… hPa in Pa; a null becomes NaN, which the chart leaves out.
+    const points = layerPoints([100_000, 10_000, 1_000], [1.5, null])
+    expect(points[0]).toEqual({ pressurePa: Math.sqrt(100_000 * 10_000), value: 1.5 })
+    expect(points[1].pressurePa).toBeCloseTo(Math.sqrt(10_000 * 1_000), 9)
+    expect(points[1].value).toBeNaN()
+  })
+
   it('when given a table, writes CSV with the header first and CRLF line ends (RFC 4180)', () => {
     const text = chartCsvText({
       fields: ['pressure (hPa)', 'temperature (K)'],
