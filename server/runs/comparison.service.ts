@@ -69,7 +69,7 @@ export function comparisonCsvRows(c: RunComparison, table: 'spectrum' | 'column'
   return col.pressurePa.map((p, level) => ({
     level,
     pressure_Pa: p,
-    forcing_W_m2: col.forcingWPerM2[level],
+    'forcing_W_m-2': col.forcingWPerM2[level],
     // The layer between this level and the one above; the top level has none.
     'heating_rate_change_layer_above_K_day-1': level < col.heatingRateChangeKPerDay.length ? col.heatingRateChangeKPerDay[level] : null,
   }))

@@ -74,7 +74,9 @@ describe('comparisons API', () => {
     )
     expect(lines).toHaveLength(3 + 20)
     const column = await a.get(`/api/comparisons/csv?before=${reference}&after=${doubled}&table=column`).expect(200)
-    expect(column.text.trim().split('\n')).toHaveLength(3 + 11)
+    const columnLines = column.text.trim().split('\n')
+    expect(columnLines[2]).toBe('level,pressure_Pa,forcing_W_m-2,heating_rate_change_layer_above_K_day-1')
+    expect(columnLines).toHaveLength(3 + 11)
   })
 
   it('refuses runs on different bins with 422 naming the field, and bad or unfinished requests clearly', async () => {
