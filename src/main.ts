@@ -24,7 +24,7 @@ setUnauthenticatedHandler(() => {
 const RELOADED_FOR = 'tauline.reloadedForChunk'
 router.onError((error: unknown, to) => {
   const message = error instanceof Error ? error.message : String(error)
-  if (!/dynamically imported module|Importing a module script failed|Failed to fetch/i.test(message)) return
+  if (!/dynamically imported module|Importing a module script failed/i.test(message)) return
   if (sessionStorage.getItem(RELOADED_FOR) === to.fullPath) return
   sessionStorage.setItem(RELOADED_FOR, to.fullPath)
   window.location.assign(to.fullPath)
