@@ -1,6 +1,7 @@
 import type { Request, Response } from 'express'
 import type { Sequelize } from 'sequelize'
 import Papa from 'papaparse'
+import type { ListQuery } from '../../shared/schemas/paging'
 import type { CreateSweepInput } from '../../shared/schemas/sweeps'
 import { AppError } from '../errors'
 import type { RunQueue } from '../runs/run-queue'
@@ -26,6 +27,9 @@ export function createSweepsController(sequelize: Sequelize, getQueue: () => Run
             req.body as CreateSweepInput,
           ),
         })
+    },
+    async list(req: Request, res: Response) {
+      res.json(await sweeps.listSweeps(req.query as unknown as ListQuery))
     },
     async get(req: Request, res: Response) {
       res.json({ sweep: await sweeps.getSweep(idParam(req)) })

@@ -1,5 +1,6 @@
 import { Router } from 'express'
 import type { Sequelize } from 'sequelize'
+import { listQuerySchema } from '../../shared/schemas/paging'
 import { createSweepSchema } from '../../shared/schemas/sweeps'
 import { createSweepsController } from '../controllers/sweeps.controller'
 import { requireAuth, requireRole } from '../middlewares/require-auth'
@@ -12,6 +13,7 @@ export function sweepsRoutes(sequelize: Sequelize, getQueue: () => RunQueue | un
   const r = Router()
   r.use(requireAuth)
   r.post('/', requireRole('analyst', 'admin'), validate('body', createSweepSchema), c.create)
+  r.get('/', validate('query', listQuerySchema), c.list)
   r.get('/:id', c.get)
   r.get('/:id/forcing.csv', c.forcingCsv)
   return r

@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto'
-import type { Sequelize } from 'sequelize'
+import { Op, type Sequelize } from 'sequelize'
 import { withSweptAmount } from '../../shared/mixtures/swept-amount'
 import { fitLogarithmicForcing } from '../../shared/physics/diagnostics/log-fit'
 import { planChunks } from '../../shared/physics/engine/prepare'
@@ -10,9 +10,11 @@ import {
   type CreateSweepInput,
   type SweepDetail,
   type SweepForcing,
+  type SweepListItem,
   type SweepMember,
 } from '../../shared/schemas/sweeps'
 import { AppError } from '../errors'
+import type { ListQuery, Page } from '../../shared/schemas/paging'
 import { Run, RunResult, Sweep, User } from '../models/index'
 import type { Actor } from '../services/access'
 import { snapshotRunInputs } from './run-inputs'
@@ -127,6 +129,44 @@ function sweepStatus(statuses: RunStatus[]): RunStatus {
   }
   if (statuses.every((s) => s === 'succeeded')) return 'succeeded'
   return statuses.includes('failed') ? 'failed' : 'cancelled'
+}
+
+/** A page of sweeps, newest first, each with its status from its members' statuses. */
+export async function listSweeps(query: ListQuery): Promise<Page<SweepListItem>> {
+  const where = query.search ? { name: { [Op.iLike]: `%${query.search}%` } } : {}
+  const [total, sweeps] = await Promise.all([
+    Sweep.count({ where }),
+    Sweep.findAll({
+      where,
+      include: [{ model: User, as: 'owner', attributes: ['displayName'] }],
+      order: [['id', 'DESC']],
+      limit: query.pageSize,
+      offset: (query.page - 1) * query.pageSize,
+    }),
+  ])
+  const members = await Run.findAll({ where: { sweepId: sweeps.map((s) => s.id) }, attributes: ['sweepId', 'status'] })
+  const statusesOf = (id: number) => members.filter((m) => m.sweepId === id).map((m) => m.status)
+  return {
+    items: sweeps.map((sweep) => {
+      const statuses = statusesOf(sweep.id)
+      return {
+        id: sweep.id,
+        name: sweep.name,
+        gas: sweep.gas,
+        unit: sweep.unit,
+        amounts: sweep.amounts,
+        referenceAmount: sweep.referenceAmount,
+        ownerName: sweep.owner?.displayName ?? '',
+        createdAt: sweep.createdAt.toISOString(),
+        status: statuses.length ? sweepStatus(statuses) : 'cancelled',
+        membersEnded: statuses.filter((st) => TERMINAL_RUN_STATUSES.includes(st)).length,
+        memberCount: statuses.length,
+      }
+    }),
+    total,
+    page: query.page,
+    pageSize: query.pageSize,
+  }
 }
 
 /**

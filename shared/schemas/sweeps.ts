@@ -72,3 +72,19 @@ export interface SweepDetail {
    */
   logarithmicFit: { top: LogFitResult; tropopause: LogFitResult; surface: LogFitResult } | null
 }
+
+/** A sweep in the list: what it varies and how far its members have got. */
+export interface SweepListItem {
+  id: number
+  name: string
+  gas: SweptGas
+  unit: string
+  amounts: number[]
+  referenceAmount: number
+  ownerName: string
+  createdAt: string
+  status: RunStatus
+  /** Members that have ended (succeeded, failed or cancelled), of `memberCount`. */
+  membersEnded: number
+  memberCount: number
+}

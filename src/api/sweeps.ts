@@ -1,5 +1,6 @@
 import type { RunSettingsInput } from '@shared/schemas/runs'
-import type { SweepDetail, SweptGas } from '@shared/schemas/sweeps'
+import type { Page } from '@shared/schemas/paging'
+import type { SweepDetail, SweepListItem, SweptGas } from '@shared/schemas/sweeps'
 import { http } from './http'
 
 export interface CreateSweepRequest {
@@ -16,6 +17,13 @@ export interface CreateSweepRequest {
 /** Submits a sweep: one member run per amount, computed together. */
 export async function createSweep(input: CreateSweepRequest): Promise<SweepDetail> {
   return (await http.post<{ sweep: SweepDetail }>('/sweeps', input)).sweep
+}
+
+/** A page of sweeps, newest first. */
+export function fetchSweeps(params: { page?: number; pageSize?: number; search?: string } = {}): Promise<Page<SweepListItem>> {
+  const q = new URLSearchParams()
+  for (const [k, v] of Object.entries(params)) if (v !== undefined && v !== '') q.set(k, String(v))
+  return http.get<Page<SweepListItem>>(`/sweeps?${q}`)
 }
 
 export async function fetchSweep(id: number): Promise<SweepDetail> {

@@ -219,4 +219,32 @@ describe('sweeps API', () => {
     await request(t.app).get('/api/sweeps/1').expect(401)
     await a.get('/api/sweeps/999999').expect(404)
   })
+
+  it('lists sweeps newest first with their status and progress, searchable, for every role', async () => {
+    const reviewer = await signedInAgent(t, 'reviewer')
+    const page = (await reviewer.get('/api/sweeps?page=1&pageSize=2').expect(200)).body
+    // The four sweeps made above: succeeded, compared with runs alone, one member stopped, failed.
+    expect(page).toMatchObject({ total: 4, page: 1, pageSize: 2 })
+    expect(page.items).toHaveLength(2)
+    const all = (await reviewer.get('/api/sweeps?pageSize=100').expect(200)).body.items
+    expect(all.map((s: { id: number }) => s.id)).toEqual([...all.map((s: { id: number }) => s.id)].sort((x, y) => y - x))
+    const first = all[all.length - 1]
+    expect(first).toMatchObject({
+      gas: 'CO2',
+      unit: 'ppmv',
+      amounts: [280, 560, 1120],
+      referenceAmount: 280,
+      status: 'succeeded',
+      membersEnded: 3,
+      memberCount: 3,
+      ownerName: 'Ines Varga',
+    })
+    expect(all.map((s: { status: string }) => s.status)).toContain('failed')
+    const found = (await reviewer.get(`/api/sweeps?search=${encodeURIComponent(first.name.slice(0, 12))}`).expect(200)).body
+    expect(found.items.map((s: { id: number }) => s.id)).toContain(first.id)
+    expect((await reviewer.get('/api/sweeps?search=no-such-sweep-name').expect(200)).body.total).toBe(0)
+    const bad = await reviewer.get('/api/sweeps?pageSize=0').expect(400)
+    expect(bad.body.error.details.fields[0].field).toBe('pageSize')
+    await request(t.app).get('/api/sweeps').expect(401)
+  })
 })

@@ -68,6 +68,15 @@ describe('a concentration sweep', () => {
     await sweepLinks.first().click()
     await page.waitForSelector('[data-test=sweep-page]')
     expect(page.url()).toBe(`${base}/sweeps/${sweepId}`)
+
+    // Sweeps are listed among the comparisons, with their status and amounts.
+    await page.click('[data-area=comparisons]')
+    const listed = page.locator(`[data-test=sweeps-list] [data-sweep-id="${sweepId}"]`)
+    await listed.waitFor()
+    expect(await listed.textContent()).toContain('CO₂ 280, 560, 1120 ppmv (reference 280)')
+    await listed.locator('a').click()
+    await page.waitForSelector('[data-test=sweep-page]')
+    expect(page.url()).toBe(`${base}/sweeps/${sweepId}`)
     await page.close()
   }, 180_000)
 })
