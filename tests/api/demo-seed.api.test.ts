@@ -1,11 +1,13 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { seedDemoSweep } from '../../server/demo/demo-sweep'
 import { seedDemoTeam, seedDemoWorkspace } from '../../server/demo/seed'
-import { GasMixture, Profile, User } from '../../server/models/index'
+import { GasMixture, Profile, Run, Sweep, User } from '../../server/models/index'
 import { createTestApp, TEST_PASSWORD, type TestApp } from '../support/test-app'
 
 let t: TestApp
 beforeAll(async () => {
-  t = await createTestApp({ seedWorkspace: true })
+  // The queue without workers: the demo sweep is queued, not computed, here.
+  t = await createTestApp({ seedWorkspace: true, runs: { threads: 0 } })
 })
 afterAll(async () => {
   await t.close()
@@ -28,6 +30,19 @@ describe('demo seed', () => {
     }
     expect(profiles.some((p) => p.source === 'us-standard-1976')).toBe(true)
     expect(await GasMixture.count()).toBe(4)
+  })
+
+  it('queues the demo CO₂ sweep once, on the mid-latitude summer atmosphere, for the workers to compute', async () => {
+    expect(await seedDemoSweep(t.sequelize, t.runSystem!.queue)).toBe(4)
+    const sweep = await Sweep.findOne()
+    expect(sweep).toMatchObject({ gas: 'CO2', unit: 'ppmv', amounts: [280, 420, 560, 1120], referenceAmount: 280 })
+    const members = await Run.findAll({ where: { sweepId: sweep!.id } })
+    expect(members.map((r) => r.status)).toEqual(['queued', 'queued', 'queued', 'queued'])
+    expect(members.every((r) => r.inputs.profile.name === 'Mid-latitude summer')).toBe(true)
+    expect(members[0].inputs.settings).toMatchObject({ startCm: 500, endCm: 850, outputResolutionCm: 1 })
+    // Once the analyst has runs, seeding again queues nothing.
+    expect(await seedDemoSweep(t.sequelize, t.runSystem!.queue)).toBe(0)
+    expect(await Run.count()).toBe(4)
   })
 
   it('when run again, creates nothing new', async () => {
