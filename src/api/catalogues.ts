@@ -8,7 +8,7 @@ import type {
   StickSpectrum,
 } from '@shared/schemas/catalogues'
 import type { Page } from '@shared/schemas/paging'
-import { http } from './http'
+import { http, queryString } from './http'
 
 export type { LineListInvalidDetails }
 
@@ -16,9 +16,7 @@ export type { LineListInvalidDetails }
 export function fetchCatalogues(
   params: { page?: number; pageSize?: number; search?: string } = {},
 ) {
-  const q = new URLSearchParams()
-  for (const [k, v] of Object.entries(params)) if (v !== undefined && v !== '') q.set(k, String(v))
-  return http.get<Page<CatalogueSummary>>(`/catalogues?${q}`)
+  return http.get<Page<CatalogueSummary>>(`/catalogues?${queryString(params)}`)
 }
 
 /** One catalogue with its per-molecule table, provenance (imports) or bands and accuracy notes (built-in). */
@@ -31,9 +29,7 @@ export function fetchStickSpectrum(
   id: CatalogueId,
   range: { startCm?: number; endCm?: number; bins?: number } = {},
 ) {
-  const q = new URLSearchParams()
-  for (const [k, v] of Object.entries(range)) if (v !== undefined && v !== null) q.set(k, String(v))
-  return http.get<StickSpectrum>(`/catalogues/${id}/sticks?${q}`)
+  return http.get<StickSpectrum>(`/catalogues/${id}/sticks?${queryString(range)}`)
 }
 
 /**

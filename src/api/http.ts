@@ -70,3 +70,10 @@ export const http = {
   /** POST a multipart form (a file and its fields), with the same CSRF and error handling. */
   upload: <T>(path: string, form: FormData) => request<T>('POST', path, form),
 }
+
+/** A query string of the set parameters (undefined, null and '' are left out), without the '?'. */
+export function queryString(params: Record<string, string | number | boolean | null | undefined>): string {
+  const q = new URLSearchParams()
+  for (const [k, v] of Object.entries(params)) if (v !== undefined && v !== null && v !== '') q.set(k, String(v))
+  return q.toString()
+}

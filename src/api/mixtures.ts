@@ -1,13 +1,11 @@
 import type { MixtureInput, MixtureSummary } from '@shared/schemas/mixtures'
 import type { MixturePreset } from '@shared/mixtures/presets'
 import type { Page } from '@shared/schemas/paging'
-import { http } from './http'
+import { http, queryString } from './http'
 
 /** A page of gas mixtures, newest first, optionally filtered by name. */
 export function fetchMixtures(params: { page?: number; pageSize?: number; search?: string } = {}) {
-  const q = new URLSearchParams()
-  for (const [k, v] of Object.entries(params)) if (v !== undefined && v !== '') q.set(k, String(v))
-  return http.get<Page<MixtureSummary>>(`/mixtures?${q}`)
+  return http.get<Page<MixtureSummary>>(`/mixtures?${queryString(params)}`)
 }
 
 export async function fetchMixturePresets(): Promise<MixturePreset[]> {

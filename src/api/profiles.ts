@@ -14,7 +14,7 @@ import type {
   ProfileSummary,
 } from '@shared/schemas/profiles'
 import type { SoundingOptions } from '@shared/schemas/soundings'
-import { http } from './http'
+import { http, queryString } from './http'
 
 /** A stored profile as the server answers a write: the detail plus warnings of the level checks. */
 export type SavedProfile = ProfileDetail & { warnings?: LevelIssue[] }
@@ -71,9 +71,7 @@ export interface SoundingUnreadableDetails {
 
 /** A page of atmosphere profiles, most recently updated first, optionally filtered by name or description. */
 export function fetchProfiles(params: { page?: number; pageSize?: number; search?: string } = {}) {
-  const q = new URLSearchParams()
-  for (const [k, v] of Object.entries(params)) if (v !== undefined && v !== '') q.set(k, String(v))
-  return http.get<Page<ProfileSummary>>(`/profiles?${q}`)
+  return http.get<Page<ProfileSummary>>(`/profiles?${queryString(params)}`)
 }
 
 /** One profile with all its levels (SI units). */

@@ -5,15 +5,13 @@ import type {
   ReviewVerification,
   RunReview,
 } from '@shared/schemas/reviews'
-import { http } from './http'
+import { http, queryString } from './http'
 
 /** A page of finished runs waiting for a sign-off, the longest waiting first. */
 export function fetchReviewQueue(
   params: { page?: number; pageSize?: number; search?: string } = {},
 ) {
-  const q = new URLSearchParams()
-  for (const [k, v] of Object.entries(params)) if (v !== undefined && v !== '') q.set(k, String(v))
-  return http.get<Page<ReviewQueueItem>>(`/reviews/queue?${q}`)
+  return http.get<Page<ReviewQueueItem>>(`/reviews/queue?${queryString(params)}`)
 }
 
 /** Every review of a run, oldest first. */

@@ -1,6 +1,6 @@
 import type { Page } from '@shared/schemas/paging'
 import type { RunDetail, RunSettingsInput, RunStatus, RunSummary } from '@shared/schemas/runs'
-import { http } from './http'
+import { http, queryString } from './http'
 
 export interface RunResults {
   runId: number
@@ -44,9 +44,7 @@ export interface RunProgress {
 
 /** A page of runs, newest first. */
 export function fetchRuns(params: { page?: number; pageSize?: number; status?: RunStatus; mine?: boolean; search?: string } = {}) {
-  const q = new URLSearchParams()
-  for (const [k, v] of Object.entries(params)) if (v !== undefined && v !== '') q.set(k, String(v))
-  return http.get<Page<RunSummary>>(`/runs?${q}`)
+  return http.get<Page<RunSummary>>(`/runs?${queryString(params)}`)
 }
 
 export async function fetchRun(id: number): Promise<RunDetail> {

@@ -1,7 +1,7 @@
 import type { RunSettingsInput } from '@shared/schemas/runs'
 import type { Page } from '@shared/schemas/paging'
 import type { SweepDetail, SweepListItem, SweptGas } from '@shared/schemas/sweeps'
-import { http } from './http'
+import { http, queryString } from './http'
 
 export interface CreateSweepRequest {
   name?: string
@@ -21,9 +21,7 @@ export async function createSweep(input: CreateSweepRequest): Promise<SweepDetai
 
 /** A page of sweeps, newest first. */
 export function fetchSweeps(params: { page?: number; pageSize?: number; search?: string } = {}): Promise<Page<SweepListItem>> {
-  const q = new URLSearchParams()
-  for (const [k, v] of Object.entries(params)) if (v !== undefined && v !== '') q.set(k, String(v))
-  return http.get<Page<SweepListItem>>(`/sweeps?${q}`)
+  return http.get<Page<SweepListItem>>(`/sweeps?${queryString(params)}`)
 }
 
 export async function fetchSweep(id: number): Promise<SweepDetail> {

@@ -1,5 +1,5 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest'
-import { ApiError, http, setCsrfToken, setUnauthenticatedHandler } from '@/api/http'
+import { ApiError, http, queryString, setCsrfToken, setUnauthenticatedHandler } from '@/api/http'
 
 type Call = { url: string; init: RequestInit }
 let calls: Call[]
@@ -54,5 +54,11 @@ describe('the HTTP client', () => {
     responses.push(json(401, { error: { code: 'UNAUTHENTICATED', message: 'Sign in' } }))
     await http.get('/runs').catch(() => undefined)
     expect(handler).toHaveBeenCalledOnce()
+  })
+
+  it('writes a query string of the set parameters only, encoded', () => {
+    expect(queryString({ page: 2, pageSize: 20, status: undefined, search: '', mine: false, range: null })).toBe('page=2&pageSize=20&mine=false')
+    expect(queryString({ search: 'CO₂ & co' })).toBe('search=CO%E2%82%82+%26+co')
+    expect(queryString({})).toBe('')
   })
 })
