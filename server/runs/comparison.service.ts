@@ -8,7 +8,8 @@ import {
   type ResultsComparison,
 } from '../../shared/results/compare-results'
 import { AppError } from '../errors'
-import { getRun, getRunResults } from './run.service'
+import { RunResult } from '../models/index'
+import { getRun } from './run.service'
 
 /** A succeeded run, or 409 naming the run and its status. */
 async function succeeded(id: number, role: 'before' | 'after'): Promise<RunDetail> {
@@ -17,6 +18,12 @@ async function succeeded(id: number, role: 'before' | 'after'): Promise<RunDetai
     throw AppError.conflict(`Run ${id} (“${run.name}”) has no results to compare (status: ${run.status}).`, { field: role })
   }
   return run
+}
+
+async function storedResults(runId: number): Promise<ComparableResults> {
+  const result = await RunResult.findByPk(runId, { attributes: ['summary', 'data'] })
+  if (!result) throw AppError.notFound('Run results')
+  return { summary: result.summary, ...result.data } as unknown as ComparableResults
 }
 
 const summaryOf = ({ inputs: _inputs, mixtureWarnings: _warnings, ...summary }: RunDetail): RunSummary => summary
@@ -28,10 +35,11 @@ const summaryOf = ({ inputs: _inputs, mixtureWarnings: _warnings, ...summary }: 
  */
 export async function compareStoredRuns(beforeId: number, afterId: number): Promise<RunComparison> {
   const [before, after] = await Promise.all([succeeded(beforeId, 'before'), succeeded(afterId, 'after')])
-  const [beforeResults, afterResults] = await Promise.all([getRunResults(beforeId), getRunResults(afterId)])
+  // The runs are known to have succeeded: read only their stored results.
+  const [beforeResults, afterResults] = await Promise.all([storedResults(beforeId), storedResults(afterId)])
   let comparison: ResultsComparison
   try {
-    comparison = compareResults(beforeResults as unknown as ComparableResults, afterResults as unknown as ComparableResults)
+    comparison = compareResults(beforeResults, afterResults)
   } catch (err) {
     if (err instanceof ResultsNotComparableError) {
       throw new AppError(422, 'NOT_COMPARABLE', err.message, { field: err.field })

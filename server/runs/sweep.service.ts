@@ -13,8 +13,8 @@ import {
   type SweepListItem,
   type SweepMember,
 } from '../../shared/schemas/sweeps'
-import { AppError } from '../errors'
 import type { ListQuery, Page } from '../../shared/schemas/paging'
+import { AppError } from '../errors'
 import { Run, RunResult, Sweep, User } from '../models/index'
 import type { Actor } from '../services/access'
 import { snapshotRunInputs } from './run-inputs'
@@ -122,8 +122,9 @@ function netFluxes(summary: Record<string, unknown>): SweepForcing {
   }
 }
 
-/** The sweep's status from its members': running until every member has ended. */
+/** The sweep's status from its members': running until every member has ended; cancelled with none left. */
 function sweepStatus(statuses: RunStatus[]): RunStatus {
+  if (statuses.length === 0) return 'cancelled'
   if (statuses.some((s) => !TERMINAL_RUN_STATUSES.includes(s))) {
     return statuses.some((s) => s !== 'queued' && s !== 'cancelled') ? 'running' : 'queued'
   }
@@ -158,7 +159,7 @@ export async function listSweeps(query: ListQuery): Promise<Page<SweepListItem>>
         referenceAmount: sweep.referenceAmount,
         ownerName: sweep.owner?.displayName ?? '',
         createdAt: sweep.createdAt.toISOString(),
-        status: statuses.length ? sweepStatus(statuses) : 'cancelled',
+        status: sweepStatus(statuses),
         membersEnded: statuses.filter((st) => TERMINAL_RUN_STATUSES.includes(st)).length,
         memberCount: statuses.length,
       }
